@@ -1,0 +1,2 @@
+// Every table of the product, split by domain; drizzle-kit reads this file.
+export * from './audit';
