@@ -1,0 +1,87 @@
+import type { Server } from 'node:http';
+
+import { createDb } from '@/db/client';
+import { runMigrations } from '@/db/migrate';
+import { createApp } from '@/server/app';
+import { ConfigError, parseEnv } from '@/server/env';
+import { createLogger } from '@/server/logger';
+import { APP_VERSION } from '@/server/version';
+
+// How long open requests get to finish after SIGTERM before connections are cut, in milliseconds.
+const SHUTDOWN_GRACE_MS = 10_000;
+
+function fail(message: string): never {
+  process.stderr.write(`\n${message}\n\n`);
+  process.exit(1);
+}
+
+function describeDbFailure(err: unknown, url: string): string {
+  const e = err as { code?: string; message?: string };
+  let where = 'the configured address';
+  try {
+    const u = new URL(url);
+    where = `${u.hostname}:${u.port || '5432'}`;
+  } catch {
+    // the URL was already validated by the env schema; keep the generic wording
+  }
+  return [
+    `Cannot reach PostgreSQL at ${where} (${e.code ?? e.message ?? 'unknown error'}).`,
+    'Start it with `npm run db:start` (or use `npm start`, which starts it);',
+    'its log is .data/pg-log/postgres.log.',
+  ].join('\n');
+}
+
+async function main(): Promise<void> {
+  let env;
+  try {
+    env = parseEnv();
+  } catch (err) {
+    if (err instanceof ConfigError) fail(err.message);
+    throw err;
+  }
+  const logger = createLogger(env.LOG_LEVEL);
+
+  try {
+    await runMigrations(env.DATABASE_URL);
+  } catch (err) {
+    fail(describeDbFailure(err, env.DATABASE_URL));
+  }
+
+  const db = createDb(env.DATABASE_URL);
+  const app = createApp({ db, logger, version: APP_VERSION, webDir: env.WEB_DIR, jsonLimit: env.JSON_LIMIT });
+  const server: Server = app.listen(env.PORT, env.HOST);
+
+  server.on('error', (err: NodeJS.ErrnoException) => {
+    if (err.code === 'EADDRINUSE') {
+      fail(`Port ${env.PORT} on ${env.HOST} is taken by another program. Stop it, or start with PORT=<free port>.`);
+    }
+    if (err.code === 'EACCES') fail(`Not allowed to listen on ${env.HOST}:${env.PORT}. Choose a port above 1024.`);
+    fail(`The server could not listen on ${env.HOST}:${env.PORT}: ${err.message}`);
+  });
+
+  server.on('listening', () => {
+    const address = server.address();
+    const port = typeof address === 'object' && address ? address.port : env.PORT;
+    logger.info({ port, version: APP_VERSION }, 'listening');
+    process.stdout.write(`\nLigandry ${APP_VERSION} is running at http://${env.HOST}:${port}\n\n`);
+  });
+
+  let stopping = false;
+  const shutdown = (signal: string) => {
+    if (stopping) process.exit(1);
+    stopping = true;
+    logger.info({ signal }, 'shutting down');
+    setTimeout(() => server.closeAllConnections(), SHUTDOWN_GRACE_MS);
+    server.close(() => {
+      db.close().finally(() => process.exit(0));
+    });
+    server.closeIdleConnections();
+  };
+  process.on('SIGTERM', () => shutdown('SIGTERM'));
+  process.on('SIGINT', () => shutdown('SIGINT'));
+}
+
+main().catch((err) => {
+  process.stderr.write(`Ligandry failed to start: ${err instanceof Error ? err.stack : String(err)}\n`);
+  process.exit(1);
+});
