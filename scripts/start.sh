@@ -1,0 +1,20 @@
+#!/usr/bin/env bash
+# npm start: dependencies, PostgreSQL, database (migrate and seed), web build, then the server in the foreground.
+set -euo pipefail
+cd "$(dirname "${BASH_SOURCE[0]}")/.."
+
+PORT="${PORT:-8080}"
+HOST="${HOST:-127.0.0.1}"
+if (exec 3<>"/dev/tcp/127.0.0.1/$PORT") 2>/dev/null; then
+  printf '\nPort %s on 127.0.0.1 is taken by another program. Stop it, or run: PORT=<free port> npm start\n\n' "$PORT" >&2
+  exit 1
+fi
+
+bash scripts/ensure-deps.sh
+bash scripts/pg.sh start
+export DATABASE_URL="${DATABASE_URL:-$(bash scripts/pg.sh url ligandry)}"
+node --import tsx scripts/prepare-db.ts
+bash scripts/build-web.sh
+
+export PORT HOST NODE_ENV="${NODE_ENV:-production}"
+exec node --import tsx server/index.ts
