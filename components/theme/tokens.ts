@@ -47,6 +47,7 @@ export type Palette = {
   onRail: string;
   onRailMuted: string;
   railActive: string;
+  railHover: string;
   railOk: string;
   railCaution: string;
   railDanger: string;
@@ -74,6 +75,7 @@ const light: Palette = {
   onRail: '#F2EFE8',
   onRailMuted: '#A9B7BE',
   railActive: '#2F5160',
+  railHover: '#27424F',
   railOk: '#8FD3A1',
   railCaution: '#EEC15A',
   railDanger: '#F39399',
@@ -101,6 +103,7 @@ const dark: Palette = {
   onRail: '#E9EDF1',
   onRailMuted: '#8D99A5',
   railActive: '#1F3340',
+  railHover: '#17232C',
   railOk: '#7FC992',
   railCaution: '#E9B949',
   railDanger: '#F0868C',
@@ -109,4 +112,5 @@ const dark: Palette = {
 /** Both palettes, keyed by colour scheme. */
 export const palettes = { light, dark } as const;
 
+/** Name of a colour scheme, as the device reports it. */
 export type SchemeName = keyof typeof palettes;

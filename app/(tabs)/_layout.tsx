@@ -1,0 +1,4 @@
+import { AppShell } from '@/components/shell/app-shell';
+
+/** The five top-level sections share one shell: side rail when wide, bottom tabs on phones. */
+export default AppShell;

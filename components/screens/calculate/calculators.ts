@@ -1,0 +1,38 @@
+/** One planned calculator: its name and a plain description of the question it answers. */
+export type CalculatorSpec = { key: string; name: string; description: string };
+
+/** The six calculators Ligandry plans, in the order a bath chemist tends to reach for them. */
+export const CALCULATORS: readonly CalculatorSpec[] = [
+  {
+    key: 'headroom',
+    name: 'Headroom',
+    description:
+      'How much more metal salt a bath will dissolve before a solid persists, such as how much more silver a fixer can carry.',
+  },
+  {
+    key: 'speciation',
+    name: 'Speciation',
+    description:
+      'Where the metal and ligand sit at equilibrium: each complex, free against total ligand, and the share of cyanide present as HCN.',
+  },
+  {
+    key: 'curves',
+    name: 'Curves',
+    description: 'Sweep one input across a range and chart solubility and species along the way.',
+  },
+  {
+    key: 'precipitation-order',
+    name: 'Precipitation order',
+    description: 'Which metal comes out of solution first as a precipitant is dosed into a mixed bath.',
+  },
+  {
+    key: 'dosing-plan',
+    name: 'Dosing plan',
+    description: 'A sequence of additions, with the state of the solution after each step.',
+  },
+  {
+    key: 'make-up',
+    name: 'Make-up',
+    description: 'How much salt to add to reach a target free-ligand level or a target headroom.',
+  },
+];

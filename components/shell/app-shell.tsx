@@ -1,0 +1,32 @@
+import { StyleSheet, useWindowDimensions, View } from 'react-native';
+import { TabSlot, useTabsWithTriggers } from 'expo-router/ui';
+
+import { BottomBar } from '@/components/shell/bottom-bar';
+import { SideRail } from '@/components/shell/side-rail';
+import { TAB_TRIGGERS } from '@/components/shell/tabs';
+import { WIDE_BREAKPOINT } from '@/components/theme/tokens';
+import { useTheme } from '@/components/theme/use-theme';
+
+/** The app frame around every section: side rail on wide screens, bottom tabs on phones. */
+export function AppShell() {
+  const { NavigationContent } = useTabsWithTriggers({ triggers: TAB_TRIGGERS });
+  const { palette } = useTheme();
+  const { width } = useWindowDimensions();
+  const wide = width >= WIDE_BREAKPOINT;
+
+  return (
+    <NavigationContent>
+      <View style={[styles.root, wide && styles.row, { backgroundColor: palette.background }]}>
+        {wide ? <SideRail /> : null}
+        <TabSlot style={styles.slot} />
+        {wide ? null : <BottomBar />}
+      </View>
+    </NavigationContent>
+  );
+}
+
+const styles = StyleSheet.create({
+  root: { flex: 1 },
+  row: { flexDirection: 'row' },
+  slot: { flex: 1, minWidth: 0, minHeight: 0 },
+});

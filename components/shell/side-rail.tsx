@@ -1,0 +1,71 @@
+import { StyleSheet, View } from 'react-native';
+import { TabTrigger } from 'expo-router/ui';
+import { useSafeAreaInsets } from 'react-native-safe-area-context';
+
+import { APP_VERSION } from '@/components/shell/app-version';
+import { BrandMark } from '@/components/shell/brand-mark';
+import { NavItem } from '@/components/shell/nav-item';
+import { ServerStatus } from '@/components/shell/server-status';
+import { TABS } from '@/components/shell/tabs';
+import { space } from '@/components/theme/tokens';
+import { useTheme } from '@/components/theme/use-theme';
+import { ThemedText } from '@/components/ui/themed-text';
+
+/** Width of the wide-screen side rail in pixels. */
+export const RAIL_WIDTH = 220;
+
+/** Wide-screen navigation: wordmark on top, the five sections, server status and version below. */
+export function SideRail() {
+  const { palette } = useTheme();
+  const insets = useSafeAreaInsets();
+  return (
+    <View
+      style={[
+        styles.rail,
+        { backgroundColor: palette.rail, borderRightColor: palette.border, paddingTop: insets.top + space.xl, paddingBottom: insets.bottom + space.lg },
+      ]}
+      testID="side-rail"
+    >
+      <View style={styles.brand} accessibilityRole="header" accessibilityLabel="Ligandry">
+        <BrandMark ring={palette.onRail} core={palette.accent} />
+        <ThemedText variant="title" tone="onRail" style={styles.wordmark}>
+          Ligandry
+        </ThemedText>
+      </View>
+      <View style={styles.nav} accessibilityRole="tablist" accessibilityLabel="Sections">
+        {TABS.map((tab) => (
+          <TabTrigger key={tab.name} name={tab.name} href={tab.href} asChild>
+            <NavItem tab={tab} variant="rail" />
+          </TabTrigger>
+        ))}
+      </View>
+      <View style={[styles.footer, { borderTopColor: palette.railActive }]}>
+        <ServerStatus />
+        <ThemedText variant="caption" tone="onRailMuted">{`Version ${APP_VERSION}`}</ThemedText>
+      </View>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  rail: {
+    width: RAIL_WIDTH,
+    borderRightWidth: 1,
+    paddingHorizontal: space.md,
+    gap: space.xxl,
+  },
+  brand: {
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: space.sm + space.xxs,
+    paddingHorizontal: space.sm,
+  },
+  wordmark: { letterSpacing: 0.3 },
+  nav: { gap: space.xs, flexGrow: 1 },
+  footer: {
+    gap: space.xs,
+    paddingTop: space.md,
+    paddingHorizontal: space.sm,
+    borderTopWidth: 1,
+  },
+});

@@ -1,0 +1,58 @@
+import Head from 'expo-router/head';
+import { type ReactNode } from 'react';
+import { ScrollView, StyleSheet, useWindowDimensions, View } from 'react-native';
+import { useSafeAreaInsets } from 'react-native-safe-area-context';
+
+import { space, WIDE_BREAKPOINT } from '@/components/theme/tokens';
+import { useTheme } from '@/components/theme/use-theme';
+import { ThemedText } from '@/components/ui/themed-text';
+
+/** Widest the reading column grows on large screens, so lines stay a readable length. */
+export const MAX_CONTENT_WIDTH = 960;
+
+type Props = { title: string; subtitle?: string; children?: ReactNode };
+
+/** Frame for every screen body: page title, optional subtitle, scrolling column and the tab title. */
+export function ScreenContainer({ title, subtitle, children }: Props) {
+  const { palette } = useTheme();
+  const { width } = useWindowDimensions();
+  const insets = useSafeAreaInsets();
+  const wide = width >= WIDE_BREAKPOINT;
+  const padding = wide ? space.xxxl : space.lg;
+  return (
+    <View style={[styles.root, { backgroundColor: palette.background }]}>
+      <Head>
+        <title>{`${title} · Ligandry`}</title>
+      </Head>
+      <ScrollView
+        style={styles.scroll}
+        contentContainerStyle={[
+          styles.content,
+          { paddingHorizontal: padding, paddingTop: (wide ? space.xxxl : space.xl) + insets.top },
+        ]}
+      >
+        <View style={styles.column}>
+          <View style={styles.header}>
+            <ThemedText variant="display" accessibilityRole="header">
+              {title}
+            </ThemedText>
+            {subtitle ? (
+              <ThemedText variant="body" tone="textMuted">
+                {subtitle}
+              </ThemedText>
+            ) : null}
+          </View>
+          {children}
+        </View>
+      </ScrollView>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  root: { flex: 1 },
+  scroll: { flex: 1 },
+  content: { paddingBottom: space.xxxl, alignItems: 'center' },
+  column: { width: '100%', maxWidth: MAX_CONTENT_WIDTH, gap: space.xl },
+  header: { gap: space.xs },
+});

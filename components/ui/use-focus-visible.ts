@@ -1,0 +1,24 @@
+import { useCallback, useState } from 'react';
+import { Platform, type NativeSyntheticEvent, type TargetedEvent } from 'react-native';
+
+type FocusTarget = { matches?: (selector: string) => boolean };
+
+function isKeyboardFocus(event: NativeSyntheticEvent<TargetedEvent>): boolean {
+  if (Platform.OS !== 'web') return false;
+  const target = (event as unknown as { target?: FocusTarget }).target;
+  try {
+    return Boolean(target?.matches?.(':focus-visible'));
+  } catch {
+    return true;
+  }
+}
+
+/** Shows a focus ring only for keyboard focus (the browser's :focus-visible), not after a click. */
+export function useFocusVisible() {
+  const [visible, setVisible] = useState(false);
+  const onFocus = useCallback((event: NativeSyntheticEvent<TargetedEvent>) => {
+    setVisible(isKeyboardFocus(event));
+  }, []);
+  const onBlur = useCallback(() => setVisible(false), []);
+  return { visible, onFocus, onBlur };
+}
