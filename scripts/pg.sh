@@ -105,9 +105,12 @@ start() {
   if port_taken "$PORT"; then
     die "port $PORT on 127.0.0.1 is taken by another program. Stop it, or set LIGANDRY_PG_PORT to a free port."
   fi
+  local before=0
+  [ -f "$LOG_FILE" ] && before="$(stat -c %s "$LOG_FILE")"
   if ! as_pg "$BINDIR/pg_ctl" -D "$PGDATA_DIR" -l "$LOG_FILE" -w -t 60 \
-      -o "-c listen_addresses=127.0.0.1 -p $PORT -k $RUN_DIR ${LIGANDRY_PG_OPTS:-}" start >/dev/null; then
-    tail -n 15 "$LOG_FILE" >&2 || true
+      -o "-c listen_addresses=127.0.0.1 -p $PORT -k $RUN_DIR ${LIGANDRY_PG_OPTS:-}" start >/dev/null 2>&1; then
+    # Show what this attempt wrote to the log, not earlier runs.
+    tail -c +"$((before + 1))" "$LOG_FILE" 2>/dev/null | tail -n 15 >&2 || true
     die "failed to start; the log is $LOG_FILE"
   fi
   echo "$PORT" > "$PORT_FILE"
