@@ -1,0 +1,46 @@
+// Runs createApp() on its own loopback port per test file, with an agent that sends a matching Origin.
+import fs from 'node:fs';
+import type { Server } from 'node:http';
+import os from 'node:os';
+import path from 'node:path';
+
+import request from 'supertest';
+
+import { createDb, type DbHandle } from '@/db/client';
+import { createApp } from '@/server/app';
+import { createLogger } from '@/server/logger';
+
+export type TestServer = {
+  server: Server;
+  origin: string;
+  db: DbHandle;
+  webDir: string;
+  agent: () => ReturnType<typeof request.agent>;
+  close: () => Promise<void>;
+};
+
+/** Starts the app against DATABASE_URL (or `dbUrl`) with a throwaway web build folder. */
+export async function startTestServer(options: { dbUrl?: string; webDir?: string } = {}): Promise<TestServer> {
+  const url = options.dbUrl ?? process.env.DATABASE_URL;
+  if (!url) throw new Error('DATABASE_URL is not set: the server project global setup makes it.');
+  const db = createDb(url, { max: 4, connectTimeoutS: 2 });
+  const webDir = options.webDir ?? fs.mkdtempSync(path.join(os.tmpdir(), 'ligandry-web-'));
+  const app = createApp({ db, logger: createLogger('silent'), version: '0.0.0-test', webDir });
+  const server = app.listen(0, '127.0.0.1');
+  await new Promise<void>((resolve) => server.once('listening', () => resolve()));
+  const address = server.address();
+  if (!address || typeof address === 'string') throw new Error('test server has no port');
+  const origin = `http://127.0.0.1:${address.port}`;
+  return {
+    server,
+    origin,
+    db,
+    webDir,
+    agent: () => request.agent(server).set('Origin', origin),
+    close: async () => {
+      server.closeAllConnections();
+      await new Promise<void>((resolve) => server.close(() => resolve()));
+      await db.close();
+    },
+  };
+}
