@@ -1,4 +1,6 @@
 // Stops the browser tests' server and drops their database.
+import { setTimeout as sleep } from 'node:timers/promises';
+
 import { dropTestDatabase } from '../support/test-db';
 
 export default async function globalTeardown(): Promise<void> {
@@ -6,9 +8,9 @@ export default async function globalTeardown(): Promise<void> {
   if (child && child.exitCode === null) {
     const exited = new Promise((resolve) => child.once('exit', resolve));
     child.kill('SIGTERM');
-    let timer: ReturnType<typeof setTimeout> | undefined;
-    await Promise.race([exited, new Promise((r) => (timer = setTimeout(r, 10_000)))]);
-    clearTimeout(timer);
+    const giveUp = new AbortController();
+    await Promise.race([exited, sleep(10_000, undefined, { signal: giveUp.signal }).catch(() => undefined)]);
+    giveUp.abort();
     if (child.exitCode === null) child.kill('SIGKILL');
   }
   await dropTestDatabase(process.env.LIGANDRY_BROWSER_DB);
