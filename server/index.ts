@@ -16,7 +16,9 @@ function fail(message: string): never {
 }
 
 function describeDbFailure(err: unknown, url: string): string {
-  const e = err as { code?: string; message?: string };
+  // Drizzle wraps the driver's error; the useful code (ECONNREFUSED, 28P01...) is on its cause.
+  const outer = err as { cause?: unknown };
+  const e = (outer.cause ?? err) as { code?: string; message?: string };
   let where = 'the configured address';
   try {
     const u = new URL(url);
@@ -25,7 +27,7 @@ function describeDbFailure(err: unknown, url: string): string {
     // the URL was already validated by the env schema; keep the generic wording
   }
   return [
-    `Cannot reach PostgreSQL at ${where} (${e.code ?? e.message ?? 'unknown error'}).`,
+    `Cannot reach PostgreSQL at ${where}: ${[e.code, e.message].filter(Boolean).join(' ') || 'unknown error'}.`,
     'Start it with `npm run db:start` (or use `npm start`, which starts it);',
     'its log is .data/pg-log/postgres.log.',
   ].join('\n');
