@@ -16,7 +16,7 @@ say() { printf 'PostgreSQL: %s\n' "$*"; }
 is_root() { [ "$(id -u)" -eq 0 ]; }
 
 # As root, the server runs as the postgres user (initdb and postgres refuse to run as root).
-as_pg() { if is_root; then runuser -u postgres -- "$@"; else "$@"; fi; }
+as_pg() { if is_root; then (cd / && runuser -u postgres -- "$@"); else "$@"; fi; }
 
 find_bindir() {
   local v
