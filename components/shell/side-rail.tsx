@@ -26,7 +26,7 @@ export function SideRail() {
       ]}
       testID="side-rail"
     >
-      <View style={styles.brand} accessibilityRole="header" accessibilityLabel="Ligandry">
+      <View style={styles.brand}>
         <BrandMark ring={palette.onRail} core={palette.accent} />
         <ThemedText variant="title" tone="onRail" style={styles.wordmark}>
           Ligandry
