@@ -71,6 +71,22 @@ describe.each(VIEWPORTS)('app shell at $name size ($width x $height)', (viewport
     await context.close();
   });
 
+  it('moves between sections by keyboard alone, and each screen has one h1 naming it', async () => {
+    const context = await browser.newContext({ viewport: { width: viewport.width, height: viewport.height } });
+    const page = await context.newPage();
+    await page.goto(`${BASE}/baths`, { waitUntil: 'networkidle' });
+    await page.getByRole('tab', { name: 'Calculate' }).focus();
+    await page.keyboard.press('Enter');
+    await page.waitForURL(`${BASE}/calculate`);
+    await expect(page.title()).resolves.toMatch(/^Calculate/);
+    const visibleH1 = (await page.evaluate(
+      `Array.from(document.querySelectorAll('h1')).filter((h) => h.offsetParent !== null).map((h) => h.textContent)`,
+    )) as string[];
+    expect(visibleH1).toEqual(['Calculate']);
+    await expect(page.getByRole('heading', { level: 2, name: 'Headroom' }).isVisible()).resolves.toBe(true);
+    await context.close();
+  });
+
   it('follows the dark colour scheme', async () => {
     const context = await browser.newContext({
       viewport: { width: viewport.width, height: viewport.height },

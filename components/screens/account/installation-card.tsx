@@ -64,7 +64,7 @@ function ServerRows() {
 export function InstallationCard() {
   return (
     <Card testID="installation-card" style={styles.card}>
-      <ThemedText variant="title" accessibilityRole="header">
+      <ThemedText variant="title" accessibilityRole="header" aria-level={2}>
         This installation
       </ThemedText>
       <Row label="App version">

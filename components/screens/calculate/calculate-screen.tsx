@@ -17,7 +17,7 @@ export function CalculateScreen() {
       <View style={styles.grid}>
         {CALCULATORS.map((calc) => (
           <Card key={calc.key} style={styles.card} testID={`calculator-${calc.key}`}>
-            <ThemedText variant="body" weight="bold" accessibilityRole="header">
+            <ThemedText variant="body" weight="bold" accessibilityRole="header" aria-level={2}>
               {calc.name}
             </ThemedText>
             <ThemedText variant="label" weight="regular" tone="textMuted" style={styles.description}>

@@ -20,7 +20,7 @@ export function SafetyScreen() {
         body="Flagged cyanide work will be listed here for a safety officer to review. Nothing can be flagged in this build yet."
       />
       <View style={styles.section}>
-        <ThemedText variant="title" accessibilityRole="header">
+        <ThemedText variant="title" accessibilityRole="header" aria-level={2}>
           Standing cautions
         </ThemedText>
         {STANDING_CAUTIONS.map((caution) => (
