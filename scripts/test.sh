@@ -9,6 +9,13 @@ bash scripts/ensure-system.sh
 bash scripts/ensure-deps.sh
 
 if ! bash scripts/pg.sh running; then
+  # Tests need a database, not a particular port: when the usual one is busy, take a free one.
+  PG_PORT="${LIGANDRY_PG_PORT:-54329}"
+  if (exec 3<>"/dev/tcp/127.0.0.1/$PG_PORT") 2>/dev/null; then
+    LIGANDRY_PG_PORT="$(node -e "const s=require('net').createServer().listen(0,'127.0.0.1',()=>{console.log(s.address().port);s.close()})")"
+    export LIGANDRY_PG_PORT
+    echo "Port $PG_PORT is busy; the test database server uses $LIGANDRY_PG_PORT."
+  fi
   bash scripts/pg.sh start
   trap 'bash scripts/pg.sh stop >/dev/null 2>&1 || true' EXIT
 fi
