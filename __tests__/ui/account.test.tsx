@@ -29,7 +29,8 @@ describe('Account screen', () => {
   });
 
   it('shows a degraded server with its database down', async () => {
-    mockFetch().mockResolvedValue(jsonResponse(200, { status: 'degraded', db: 'down', version: '2.0.0' }));
+    // The server answers 503 with its report when its database is down.
+    mockFetch().mockResolvedValue(jsonResponse(503, { status: 'degraded', db: 'down', version: '2.0.0' }));
     renderRouter('./app', { initialUrl: '/account' });
     expect(await screen.findByText('Up, degraded')).toBeOnTheScreen();
     expect(screen.getByText('Down')).toBeOnTheScreen();
@@ -51,6 +52,6 @@ describe('Account screen', () => {
   it('shows the server’s own words when it answers with an error', async () => {
     mockFetch().mockResolvedValue(jsonResponse(404, 'Not Found'));
     renderRouter('./app', { initialUrl: '/account' });
-    expect(await screen.findByText('Server not reachable: The server answered 404')).toBeOnTheScreen();
+    expect(await screen.findByText('Server check failed: The server answered 404')).toBeOnTheScreen();
   });
 });

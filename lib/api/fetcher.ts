@@ -28,8 +28,16 @@ async function readJson(response: Response): Promise<unknown> {
   }
 }
 
+/** Per-call options: `dataStatuses` are non-2xx statuses whose body is data (health answers 503 with its report). */
+export type ApiFetchOptions = { dataStatuses?: readonly number[] };
+
 /** Fetches a same-origin API path and returns its body checked against `schema`, or throws ApiError. */
-export async function apiFetch<S extends z.ZodType>(path: string, schema: S, init?: RequestInit): Promise<z.infer<S>> {
+export async function apiFetch<S extends z.ZodType>(
+  path: string,
+  schema: S,
+  init?: RequestInit,
+  options: ApiFetchOptions = {},
+): Promise<z.infer<S>> {
   let response: Response;
   try {
     response = await fetch(path, {
@@ -42,7 +50,7 @@ export async function apiFetch<S extends z.ZodType>(path: string, schema: S, ini
   }
 
   const body = await readJson(response);
-  if (!response.ok) {
+  if (!response.ok && !options.dataStatuses?.includes(response.status)) {
     const parsed = errorBodySchema.safeParse(body);
     if (parsed.success) {
       const { code, message, details } = parsed.data.error;

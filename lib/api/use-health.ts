@@ -11,7 +11,8 @@ export const HEALTH_REFRESH_MS = 30_000;
 export function useHealth() {
   const { data, error, isLoading, mutate } = useSWR<Health, ApiError>(
     keys.health,
-    (path: string) => apiFetch(path, healthSchema),
+    // 503 still carries the report: the server is up and says its database is down.
+    (path: string) => apiFetch(path, healthSchema, undefined, { dataStatuses: [503] }),
     { refreshInterval: HEALTH_REFRESH_MS },
   );
   return { data, error, isLoading, mutate };

@@ -23,12 +23,16 @@ function Row({ label, children }: { label: string; children: ReactNode }) {
 function ServerRows() {
   const { data, error, isLoading, mutate } = useHealth();
   if (error) {
+    // Status 0 means no answer at all; any other status means the server answered with an error.
+    const answered = error.status > 0;
     return (
       <View style={styles.block}>
         <Row label="Server">
-          <StatusPill kind="bad" label="Not reachable" />
+          <StatusPill kind="bad" label={answered ? 'Check failed' : 'Not reachable'} />
         </Row>
-        <ThemedText variant="label" weight="regular">{`Server not reachable: ${error.message}`}</ThemedText>
+        <ThemedText variant="label" weight="regular">
+          {answered ? `Server check failed: ${error.message}` : `Server not reachable: ${error.message}`}
+        </ThemedText>
         <Button label="Retry" accessibilityHint="Checks the server again" onPress={() => void mutate()} />
       </View>
     );
