@@ -24,6 +24,7 @@ export async function startTestServer(options: { dbUrl?: string; webDir?: string
   const url = options.dbUrl ?? process.env.DATABASE_URL;
   if (!url) throw new Error('DATABASE_URL is not set: the server project global setup makes it.');
   const db = createDb(url, { max: 4, connectTimeoutS: 2 });
+  const ownWebDir = !options.webDir;
   const webDir = options.webDir ?? fs.mkdtempSync(path.join(os.tmpdir(), 'ligandry-web-'));
   const app = createApp({ db, logger: createLogger('silent'), version: '0.0.0-test', webDir });
   const server = app.listen(0, '127.0.0.1');
@@ -41,6 +42,7 @@ export async function startTestServer(options: { dbUrl?: string; webDir?: string
       server.closeAllConnections();
       await new Promise<void>((resolve) => server.close(() => resolve()));
       await db.close();
+      if (ownWebDir) fs.rmSync(webDir, { recursive: true, force: true });
     },
   };
 }
