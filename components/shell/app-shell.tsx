@@ -1,18 +1,17 @@
-import { StyleSheet, useWindowDimensions, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 import { TabSlot, useTabsWithTriggers } from 'expo-router/ui';
 
 import { BottomBar } from '@/components/shell/bottom-bar';
 import { SideRail } from '@/components/shell/side-rail';
 import { TAB_TRIGGERS } from '@/components/shell/tabs';
-import { WIDE_BREAKPOINT } from '@/components/theme/tokens';
+import { useIsWide } from '@/components/theme/use-is-wide';
 import { useTheme } from '@/components/theme/use-theme';
 
 /** The app frame around every section: side rail on wide screens, bottom tabs on phones. */
 export function AppShell() {
   const { NavigationContent } = useTabsWithTriggers({ triggers: TAB_TRIGGERS });
   const { palette } = useTheme();
-  const { width } = useWindowDimensions();
-  const wide = width >= WIDE_BREAKPOINT;
+  const wide = useIsWide();
 
   return (
     <NavigationContent>

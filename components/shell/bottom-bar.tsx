@@ -1,9 +1,7 @@
 import { StyleSheet, View } from 'react-native';
-import { TabTrigger } from 'expo-router/ui';
 import { useSafeAreaInsets } from 'react-native-safe-area-context';
 
-import { NavItem } from '@/components/shell/nav-item';
-import { TABS } from '@/components/shell/tabs';
+import { NavItems } from '@/components/shell/nav-item';
 import { space } from '@/components/theme/tokens';
 import { useTheme } from '@/components/theme/use-theme';
 
@@ -21,11 +19,7 @@ export function BottomBar() {
       accessibilityLabel="Sections"
       testID="bottom-bar"
     >
-      {TABS.map((tab) => (
-        <TabTrigger key={tab.name} name={tab.name} href={tab.href} asChild>
-          <NavItem tab={tab} variant="bar" />
-        </TabTrigger>
-      ))}
+      <NavItems variant="bar" />
     </View>
   );
 }

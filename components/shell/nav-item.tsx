@@ -1,7 +1,7 @@
 import { Pressable, StyleSheet, View, type PressableStateCallbackType } from 'react-native';
-import { type TabTriggerSlotProps } from 'expo-router/ui';
+import { TabTrigger, type TabTriggerSlotProps } from 'expo-router/ui';
 
-import { type TabSpec } from '@/components/shell/tabs';
+import { TABS, type TabSpec } from '@/components/shell/tabs';
 import { radius, space } from '@/components/theme/tokens';
 import { useTheme } from '@/components/theme/use-theme';
 import { ThemedText } from '@/components/ui/themed-text';
@@ -65,6 +65,15 @@ export function NavItem({ tab, variant, isFocused = false, onPress, onLongPress,
       </ThemedText>
     </Pressable>
   );
+}
+
+/** The five sections as tab triggers, for the rail or the bar. */
+export function NavItems({ variant }: { variant: NavVariant }) {
+  return TABS.map((tab) => (
+    <TabTrigger key={tab.name} name={tab.name} href={tab.href} asChild>
+      <NavItem tab={tab} variant={variant} />
+    </TabTrigger>
+  ));
 }
 
 const styles = StyleSheet.create({

@@ -20,16 +20,14 @@ export function summarizeHealth(data: Health | undefined, error: ApiError | unde
   return { kind: 'ok', text: 'Server online' };
 }
 
-type Props = { onRail?: boolean };
-
 /** Compact dot-and-words server status for the side rail footer. */
-export function ServerStatus({ onRail = true }: Props) {
+export function ServerStatus() {
   const { data, error } = useHealth();
   const summary = summarizeHealth(data, error);
   return (
     <View style={styles.row} accessibilityRole="text" accessibilityLiveRegion="polite">
-      <StatusDot kind={summary.kind} size={8} onRail={onRail} />
-      <ThemedText variant="caption" tone={onRail ? 'onRail' : 'textMuted'}>
+      <StatusDot kind={summary.kind} size={8} onRail />
+      <ThemedText variant="caption" tone="onRail">
         {summary.text}
       </ThemedText>
     </View>

@@ -1,12 +1,10 @@
 import { StyleSheet, View } from 'react-native';
-import { TabTrigger } from 'expo-router/ui';
 import { useSafeAreaInsets } from 'react-native-safe-area-context';
 
 import { APP_VERSION } from '@/components/shell/app-version';
 import { BrandMark } from '@/components/shell/brand-mark';
-import { NavItem } from '@/components/shell/nav-item';
+import { NavItems } from '@/components/shell/nav-item';
 import { ServerStatus } from '@/components/shell/server-status';
-import { TABS } from '@/components/shell/tabs';
 import { space } from '@/components/theme/tokens';
 import { useTheme } from '@/components/theme/use-theme';
 import { ThemedText } from '@/components/ui/themed-text';
@@ -33,11 +31,7 @@ export function SideRail() {
         </ThemedText>
       </View>
       <View style={styles.nav} accessibilityRole="tablist" accessibilityLabel="Sections">
-        {TABS.map((tab) => (
-          <TabTrigger key={tab.name} name={tab.name} href={tab.href} asChild>
-            <NavItem tab={tab} variant="rail" />
-          </TabTrigger>
-        ))}
+        <NavItems variant="rail" />
       </View>
       <View style={[styles.footer, { borderTopColor: palette.railActive }]}>
         <ServerStatus />

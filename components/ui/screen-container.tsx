@@ -1,9 +1,10 @@
 import Head from 'expo-router/head';
 import { type ReactNode } from 'react';
-import { ScrollView, StyleSheet, useWindowDimensions, View } from 'react-native';
+import { ScrollView, StyleSheet, View } from 'react-native';
 import { useSafeAreaInsets } from 'react-native-safe-area-context';
 
-import { space, WIDE_BREAKPOINT } from '@/components/theme/tokens';
+import { space } from '@/components/theme/tokens';
+import { useIsWide } from '@/components/theme/use-is-wide';
 import { useTheme } from '@/components/theme/use-theme';
 import { ThemedText } from '@/components/ui/themed-text';
 
@@ -15,9 +16,8 @@ type Props = { title: string; subtitle?: string; children?: ReactNode };
 /** Frame for every screen body: page title, optional subtitle, scrolling column and the tab title. */
 export function ScreenContainer({ title, subtitle, children }: Props) {
   const { palette } = useTheme();
-  const { width } = useWindowDimensions();
   const insets = useSafeAreaInsets();
-  const wide = width >= WIDE_BREAKPOINT;
+  const wide = useIsWide();
   const padding = wide ? space.xxxl : space.lg;
   return (
     <View style={[styles.root, { backgroundColor: palette.background }]}>

@@ -1,16 +1,14 @@
 import { InstallationCard } from '@/components/screens/account/installation-card';
 import { PersonIcon } from '@/components/shell/icons';
-import { useTheme } from '@/components/theme/use-theme';
 import { EmptyState } from '@/components/ui/empty-state';
 import { ScreenContainer } from '@/components/ui/screen-container';
 
 /** Account section: nobody can sign in yet; shows what this installation is running instead. */
 export function AccountScreen() {
-  const { palette } = useTheme();
   return (
     <ScreenContainer title="Account">
       <EmptyState
-        icon={<PersonIcon color={palette.primary} size={30} />}
+        Icon={PersonIcon}
         title="Not signed in"
         body="Team sign-in is not set up in this build."
       />

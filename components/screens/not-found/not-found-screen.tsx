@@ -16,7 +16,7 @@ export function NotFoundScreen() {
   return (
     <ScreenContainer title="Page not found">
       <EmptyState
-        icon={<LostIcon color={palette.primary} size={30} />}
+        Icon={LostIcon}
         title="Nothing lives at this address"
         body="The link may be mistyped, or the page may belong to a later build of Ligandry."
       >

@@ -4,18 +4,16 @@ import { CautionCard } from '@/components/screens/safety/caution-card';
 import { STANDING_CAUTIONS } from '@/components/screens/safety/cautions';
 import { TrayIcon } from '@/components/shell/icons';
 import { space } from '@/components/theme/tokens';
-import { useTheme } from '@/components/theme/use-theme';
 import { EmptyState } from '@/components/ui/empty-state';
 import { ScreenContainer } from '@/components/ui/screen-container';
 import { ThemedText } from '@/components/ui/themed-text';
 
 /** Safety section: an empty review queue and the standing cautions that always apply. */
 export function SafetyScreen() {
-  const { palette } = useTheme();
   return (
     <ScreenContainer title="Safety" subtitle="Work flagged for review, and the cautions that apply to all of it.">
       <EmptyState
-        icon={<TrayIcon color={palette.primary} size={30} />}
+        Icon={TrayIcon}
         title="Nothing waiting for review"
         body="Flagged cyanide work will be listed here for a safety officer to review. Nothing can be flagged in this build yet."
       />
