@@ -5,9 +5,8 @@ cd "$(dirname "${BASH_SOURCE[0]}")/.."
 bash scripts/ensure-deps.sh
 bash scripts/pg.sh start
 export DATABASE_URL="${DATABASE_URL:-$(bash scripts/pg.sh url ligandry)}"
-node --import tsx scripts/prepare-db.ts
 bash scripts/build-web.sh
-export PORT="${PORT:-8080}" HOST="${HOST:-127.0.0.1}" NODE_ENV=development
+export PORT="${PORT:-8080}" HOST="${HOST:-127.0.0.1}" NODE_ENV=development SEED_DEMO=1
 
 node scripts/watch-web.js &
 WATCHER=$!

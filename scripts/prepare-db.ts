@@ -1,22 +1,10 @@
-// Makes the database ready for the server: creates it if missing, applies migrations, seeds demo data.
-import { createDb } from '@/db/client';
-import { ensureDatabase } from '@/db/ensure-database';
-import { runMigrations } from '@/db/migrate';
-import { seedDemo } from '@/db/seed';
+// npm run db:prepare: creates the database at DATABASE_URL if missing, applies migrations, seeds demo data.
+import { describePrepare, prepareDemoDatabase } from '@/db/prepare';
 
 async function main(): Promise<void> {
   const url = process.env.DATABASE_URL;
-  if (!url) throw new Error('DATABASE_URL is not set (scripts/start.sh sets it from scripts/pg.sh url).');
-  const { created, name } = await ensureDatabase(url);
-  if (created) process.stdout.write(`Created database ${name}.\n`);
-  await runMigrations(url);
-  const handle = createDb(url, { max: 1 });
-  try {
-    const seeded = await seedDemo(handle.db);
-    process.stdout.write(seeded.applied ? `Seeded demo data (v${seeded.version}).\n` : 'Demo data already present.\n');
-  } finally {
-    await handle.close();
-  }
+  if (!url) throw new Error('DATABASE_URL is not set (bash scripts/pg.sh url prints one).');
+  process.stdout.write(describePrepare(await prepareDemoDatabase(url)));
 }
 
 main().catch((err) => {

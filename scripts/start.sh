@@ -13,8 +13,8 @@ fi
 bash scripts/ensure-deps.sh
 bash scripts/pg.sh start
 export DATABASE_URL="${DATABASE_URL:-$(bash scripts/pg.sh url ligandry)}"
-node --import tsx scripts/prepare-db.ts
 bash scripts/build-web.sh
 
-export PORT HOST NODE_ENV="${NODE_ENV:-production}"
+# SEED_DEMO: the server creates the database if missing, migrates and seeds before it listens.
+export PORT HOST NODE_ENV="${NODE_ENV:-production}" SEED_DEMO=1
 exec node --import tsx server/index.ts

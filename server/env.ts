@@ -19,6 +19,11 @@ const envSchema = z.object({
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   WEB_DIR: z.string().min(1).default(path.join(ROOT, 'dist')),
   JSON_LIMIT: z.string().regex(/^\d+(b|kb|mb)$/, 'must look like 100kb or 1mb').default('100kb'),
+  // 1 (npm start, npm run dev): create the database if missing, migrate, then seed the demo shop.
+  SEED_DEMO: z
+    .enum(['0', '1'], { error: 'must be 0 or 1' })
+    .default('0')
+    .transform((v) => v === '1'),
 });
 
 /** Settings read from the environment once at start-up. */

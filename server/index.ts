@@ -2,6 +2,7 @@ import type { Server } from 'node:http';
 
 import { createDb } from '@/db/client';
 import { runMigrations } from '@/db/migrate';
+import { describePrepare, prepareDemoDatabase } from '@/db/prepare';
 import { createApp } from '@/server/app';
 import { ConfigError, parseEnv } from '@/server/env';
 import { createLogger } from '@/server/logger';
@@ -44,7 +45,11 @@ async function main(): Promise<void> {
   const logger = createLogger(env.LOG_LEVEL);
 
   try {
-    await runMigrations(env.DATABASE_URL);
+    if (env.SEED_DEMO) {
+      process.stdout.write(describePrepare(await prepareDemoDatabase(env.DATABASE_URL)));
+    } else {
+      await runMigrations(env.DATABASE_URL);
+    }
   } catch (err) {
     fail(describeDbFailure(err, env.DATABASE_URL));
   }
