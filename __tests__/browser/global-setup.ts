@@ -5,7 +5,7 @@ import fs from 'node:fs';
 import net from 'node:net';
 import path from 'node:path';
 
-import { createTestDatabase } from '../support/test-db';
+import { testDatabaseUrl } from '../support/test-db';
 
 const ROOT = path.resolve(__dirname, '../..');
 
@@ -45,13 +45,14 @@ export default async function globalSetup(): Promise<void> {
   if (!fs.existsSync(path.join(ROOT, 'dist/index.html'))) {
     throw new Error('No web build in dist/: run `npm run build:web` (npm test does it first).');
   }
-  const dbUrl = await createTestDatabase('ligandry_browser');
+  // The server makes, migrates and seeds this database itself, as it does under npm start.
+  const dbUrl = testDatabaseUrl('ligandry_browser');
   const port = await freePort();
   const url = `http://127.0.0.1:${port}`;
   let log = '';
   const child = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
     cwd: ROOT,
-    env: { ...process.env, PORT: String(port), HOST: '127.0.0.1', DATABASE_URL: dbUrl, LOG_LEVEL: 'warn', NODE_ENV: 'test' },
+    env: { ...process.env, PORT: String(port), HOST: '127.0.0.1', DATABASE_URL: dbUrl, LOG_LEVEL: 'warn', NODE_ENV: 'test', SEED_DEMO: '1' },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
   child.stdout?.on('data', (d: Buffer) => (log += d.toString()));

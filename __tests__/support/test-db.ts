@@ -18,13 +18,19 @@ export function adminUrl(): string {
   return url;
 }
 
-/** Creates and migrates a database named `<prefix>_<time>_<random>`; returns its URL. */
-export async function createTestDatabase(prefix: string): Promise<string> {
+/** A URL for a database named `<prefix>_<time>_<random>` that does not exist yet. */
+export function testDatabaseUrl(prefix: string): string {
   const url = new URL(adminUrl());
   url.pathname = `/${prefix}_${Date.now().toString(36)}_${randomBytes(3).toString('hex')}`;
-  await ensureDatabase(url.toString());
-  await runMigrations(url.toString());
   return url.toString();
+}
+
+/** Creates and migrates a fresh test database; returns its URL. */
+export async function createTestDatabase(prefix: string): Promise<string> {
+  const url = testDatabaseUrl(prefix);
+  await ensureDatabase(url);
+  await runMigrations(url);
+  return url;
 }
 
 /** Drops a database made by createTestDatabase, even with clients still connected. */
