@@ -1,4 +1,3 @@
-import fs from 'node:fs';
 import path from 'node:path';
 
 import express, { Router } from 'express';
@@ -20,11 +19,11 @@ export function webRouter(webDir: string): Router {
   router.use(express.static(webDir, { index: false, maxAge: '1h' }));
   router.get('/{*splat}', (req, res, next) => {
     if (!req.accepts('html')) return next();
-    if (!fs.existsSync(indexFile)) {
-      res.status(503).type('html').send(NOT_BUILT);
-      return;
-    }
-    res.set('Cache-Control', 'no-cache').sendFile(indexFile);
+    res.set('Cache-Control', 'no-cache').sendFile(indexFile, (err?: NodeJS.ErrnoException) => {
+      if (!err) return;
+      if (err.code === 'ENOENT' && !res.headersSent) res.status(503).type('html').send(NOT_BUILT);
+      else next(err);
+    });
   });
   return router;
 }
