@@ -1,0 +1,583 @@
+// Newton-Raphson for one assemblage of solids (Westall's tableau formulation). Unknowns: ln(free
+// concentration) of each component with a total, the amount of each present solid and, under
+// Davies with a computed ionic strength, s = sqrt(I). Equations: the mass balances, log IAP =
+// log Ksp for each present solid, and s^2 = I(concentrations). A mass balance whose terms are all
+// positive is written as ln(calculated total / analytical total), which makes steps from far
+// away nearly exact for a dominant complex; others are scaled linearly. Steps are damped (a cap
+// on any ln step, then halving while the residual grows). A start far from the answer is first
+// relaxed one balance at a time; when Newton stalls, a bracketing fallback solves each balance
+// for its own unknown (monotone in it) before Newton resumes.
+//
+// NOTE: longer than most files: the kernel keeps its arrays in one object so that an iteration
+// allocates nothing, which is what keeps a solve in the tens of microseconds.
+
+import { daviesPhi, daviesPhiSlope } from './activity';
+import { DEFAULTS } from './defaults';
+import { solveInPlace } from './linear';
+import type { Tableau } from './tableau';
+
+const MAX_LN = 700;
+
+/** Outcome of one Newton attempt on one assemblage. */
+export interface NewtonOutcome {
+  converged: boolean;
+  singular: boolean;
+  iterations: number;
+  residual: number;
+}
+
+/** One line of the optional trace. */
+export interface TraceLine {
+  iteration: number;
+  residual: number;
+  step: number;
+  solids: string[];
+}
+
+/** Which components are unknown, which species can exist, which solids are present. */
+export class Assemblage {
+  tab!: Tableau;
+  m = 0;
+  p = 0;
+  nl = 0;
+  private dim = 0;
+  /** Component index of each unknown; componentRow[j] is the unknown's row or -1. */
+  readonly u: Int32Array;
+  readonly componentRow: Int32Array;
+  /** Species index of each live row; speciesRow[i] is the row or -1 (species that cannot form). */
+  readonly live: Int32Array;
+  readonly speciesRow: Int32Array;
+  readonly present: Int32Array;
+  private readonly au: Float64Array;
+  private readonly bu: Float64Array;
+  private readonly allPos: Uint8Array;
+  private readonly T: Float64Array;
+  private readonly base0: Float64Array;
+  private readonly sbase0: Float64Array;
+  private readonly qS: Float64Array;
+  private readonly z2S: Float64Array;
+  private readonly z2U: Float64Array;
+  private readonly qB: Float64Array;
+  private fixedIon = 0;
+  /** 'ideal': gamma 1; 'held': I fixed by the problem; 'free': I solved with the rest. */
+  private mode: 'ideal' | 'held' | 'free' = 'ideal';
+  private ionActive = false;
+  // state
+  readonly lnx: Float64Array;
+  readonly n: Float64Array;
+  private s = 0;
+  private phi = 0;
+  // results of the last evaluation
+  readonly c: Float64Array;
+  readonly x: Float64Array;
+  private readonly calc: Float64Array;
+  private readonly absSum: Float64Array;
+  private readonly diag: Float64Array;
+  private ionCalc = 0;
+  private readonly f: Float64Array;
+  private readonly dF: Float64Array;
+  // work
+  private readonly dcalc: Float64Array;
+  private readonly dIon: Float64Array;
+  private readonly G: Float64Array;
+  private readonly J: Float64Array;
+  private readonly rowDiv: Float64Array;
+  private readonly logForm: Uint8Array;
+  private readonly step: Float64Array;
+  private readonly saveLnx: Float64Array;
+  private readonly saveN: Float64Array;
+  trace: TraceLine[] | null = null;
+
+  /** Work space for tableaux of up to nc components, ns species and nsol solids. */
+  constructor(nc: number, ns: number, nsol: number) {
+    const maxDim = nc + nsol + 1;
+    this.u = new Int32Array(nc);
+    this.componentRow = new Int32Array(nc);
+    this.live = new Int32Array(ns);
+    this.speciesRow = new Int32Array(ns);
+    this.present = new Int32Array(nsol);
+    this.au = new Float64Array(ns * nc);
+    this.bu = new Float64Array(nsol * nc);
+    this.allPos = new Uint8Array(nc);
+    this.T = new Float64Array(nc);
+    this.base0 = new Float64Array(ns);
+    this.sbase0 = new Float64Array(nsol);
+    this.qS = new Float64Array(ns);
+    this.z2S = new Float64Array(ns);
+    this.z2U = new Float64Array(nc);
+    this.qB = new Float64Array(nsol);
+    this.lnx = new Float64Array(nc);
+    this.n = new Float64Array(nsol);
+    this.c = new Float64Array(ns);
+    this.x = new Float64Array(nc);
+    this.calc = new Float64Array(nc);
+    this.absSum = new Float64Array(nc);
+    this.diag = new Float64Array(nc);
+    this.f = new Float64Array(nsol);
+    this.dF = new Float64Array(nsol);
+    this.dcalc = new Float64Array(nc * maxDim);
+    this.dIon = new Float64Array(maxDim);
+    this.G = new Float64Array(maxDim);
+    this.J = new Float64Array(maxDim * maxDim);
+    this.rowDiv = new Float64Array(nc);
+    this.logForm = new Uint8Array(nc);
+    this.step = new Float64Array(maxDim);
+    this.saveLnx = new Float64Array(nc);
+    this.saveN = new Float64Array(nsol);
+  }
+
+  /** Sets up the unknowns and equations for one set of present solids. */
+  configure(tab: Tableau, absent: ArrayLike<number>, present: readonly number[]): this {
+    this.tab = tab;
+    this.trace = null;
+    const { nc, ns, a, b, fixed, fixedLn, componentCharge, speciesCharge } = tab;
+    let m = 0;
+    for (let j = 0; j < nc; j++) {
+      if (!fixed[j] && !absent[j]) {
+        this.componentRow[j] = m;
+        this.u[m] = j;
+        this.T[m] = tab.total[j] as number;
+        this.z2U[m] = (componentCharge[j] as number) ** 2;
+        this.allPos[m] = 1;
+        m++;
+      } else {
+        this.componentRow[j] = -1;
+      }
+    }
+    this.m = m;
+    let fixedIon = 0;
+    for (let j = 0; j < nc; j++) if (fixed[j]) fixedIon += 0.5 * (componentCharge[j] as number) ** 2 * Math.exp(fixedLn[j] as number);
+    this.fixedIon = fixedIon;
+    let nl = 0;
+    for (let i = 0; i < ns; i++) {
+      let dead = false;
+      for (let j = 0; j < nc; j++) if (absent[j] && a[i * nc + j] !== 0) dead = true;
+      if (dead) {
+        this.speciesRow[i] = -1;
+        continue;
+      }
+      const z = speciesCharge[i] as number;
+      let base = tab.lnK[i] as number;
+      let q = -z * z;
+      for (let k = 0; k < m; k++) this.au[nl * m + k] = 0;
+      for (let j = 0; j < nc; j++) {
+        const aij = a[i * nc + j] as number;
+        if (aij === 0) continue;
+        q += aij * (componentCharge[j] as number) ** 2;
+        if (fixed[j]) base += aij * (fixedLn[j] as number);
+        const k = this.componentRow[j] as number;
+        if (k >= 0) {
+          this.au[nl * m + k] = aij;
+          if (aij < 0) this.allPos[k] = 0;
+        }
+      }
+      this.speciesRow[i] = nl;
+      this.live[nl] = i;
+      this.base0[nl] = base;
+      this.qS[nl] = q;
+      this.z2S[nl] = z * z;
+      nl++;
+    }
+    this.nl = nl;
+    const p = present.length;
+    for (let r = 0; r < p; r++) {
+      const sIdx = present[r] as number;
+      this.present[r] = sIdx;
+      let base = -(tab.lnKsp[sIdx] as number);
+      let q = 0;
+      for (let k = 0; k < m; k++) this.bu[r * m + k] = 0;
+      for (let j = 0; j < nc; j++) {
+        const bj = b[sIdx * nc + j] as number;
+        if (bj === 0) continue;
+        q += bj * (componentCharge[j] as number) ** 2;
+        if (fixed[j]) base += bj * (fixedLn[j] as number);
+        const k = this.componentRow[j] as number;
+        if (k >= 0) {
+          this.bu[r * m + k] = bj;
+          if (bj < 0) this.allPos[k] = 0;
+        }
+      }
+      this.sbase0[r] = base;
+      this.qB[r] = q;
+      this.n[r] = 0;
+    }
+    this.p = p;
+    this.mode = tab.activity === 'ideal' ? 'ideal' : tab.fixedIonicStrength !== null ? 'held' : 'free';
+    this.ionActive = false;
+    this.dim = m + p;
+    this.s = 0;
+    return this;
+  }
+
+  /** The present solids as a plain list of solid indices. */
+  presentList(): number[] {
+    const list: number[] = [];
+    for (let r = 0; r < this.p; r++) list.push(this.present[r] as number);
+    return list;
+  }
+
+  /** Starts (or holds) the ionic strength at I, mol/L. */
+  setIonicStrength(I: number): void {
+    this.s = Math.sqrt(Math.max(0, this.tab.fixedIonicStrength ?? I));
+  }
+
+  /** Ionic strength, mol/L: the value used for activities, or computed from the species if ideal. */
+  get ionicStrength(): number {
+    return this.mode === 'ideal' ? this.ionCalc : this.s * this.s;
+  }
+
+  /** ln gamma of component j at the current ionic strength. */
+  lnGammaComponent(j: number): number {
+    return this.phi * (this.tab.componentCharge[j] as number) ** 2;
+  }
+
+  /** ln gamma of species i at the current ionic strength. */
+  lnGammaSpecies(i: number): number {
+    return this.phi * (this.tab.speciesCharge[i] as number) ** 2;
+  }
+
+  /** Concentrations, calculated totals and (optionally) their derivatives at the current state. */
+  evaluate(withJacobian: boolean): void {
+    const { m, p, dim, au, bu, lnx } = this;
+    const ionCol = this.ionActive ? m + p : -1;
+    const davies = this.mode !== 'ideal';
+    this.phi = davies ? daviesPhi(this.s, this.tab.daviesA) : 0;
+    const dphi = ionCol >= 0 ? daviesPhiSlope(this.s, this.tab.daviesA) : 0;
+    let ion = this.fixedIon;
+    let dIonDs = 0;
+    if (withJacobian) {
+      const dc = this.dcalc;
+      for (let q = 0, end = m * dim; q < end; q++) dc[q] = 0;
+      for (let q = 0; q < dim; q++) this.dIon[q] = 0;
+    }
+    for (let k = 0; k < m; k++) {
+      const v = lnx[k] as number;
+      const xv = Math.exp(v > MAX_LN ? MAX_LN : v);
+      this.x[k] = xv;
+      this.calc[k] = xv;
+      this.absSum[k] = xv;
+      this.diag[k] = xv;
+      ion += 0.5 * (this.z2U[k] as number) * xv;
+      if (withJacobian) {
+        this.dcalc[k * dim + k] = xv;
+        this.dIon[k] = 0.5 * (this.z2U[k] as number) * xv;
+      }
+    }
+    for (let r = 0; r < this.nl; r++) {
+      const off = r * m;
+      let l = (this.base0[r] as number) + this.phi * (this.qS[r] as number);
+      for (let k = 0; k < m; k++) {
+        const a = au[off + k] as number;
+        if (a !== 0) l += a * (lnx[k] as number);
+      }
+      const c = Math.exp(l > MAX_LN ? MAX_LN : l);
+      this.c[r] = c;
+      if (c === 0) continue;
+      const zc = 0.5 * (this.z2S[r] as number) * c;
+      ion += zc;
+      const dLnCds = dphi * (this.qS[r] as number);
+      if (withJacobian && ionCol >= 0) dIonDs += zc * dLnCds;
+      for (let k = 0; k < m; k++) {
+        const a = au[off + k] as number;
+        if (a === 0) continue;
+        const ac = a * c;
+        this.calc[k] = (this.calc[k] as number) + ac;
+        this.absSum[k] = (this.absSum[k] as number) + Math.abs(ac);
+        this.diag[k] = (this.diag[k] as number) + ac * a;
+        if (withJacobian) {
+          const row = k * dim;
+          for (let q = 0; q < m; q++) {
+            const aq = au[off + q] as number;
+            if (aq !== 0) this.dcalc[row + q] = (this.dcalc[row + q] as number) + ac * aq;
+          }
+          if (ionCol >= 0) this.dcalc[row + ionCol] = (this.dcalc[row + ionCol] as number) + ac * dLnCds;
+          this.dIon[k] = (this.dIon[k] as number) + zc * a;
+        }
+      }
+    }
+    for (let r = 0; r < p; r++) {
+      const nr = this.n[r] as number;
+      let fs = (this.sbase0[r] as number) + this.phi * (this.qB[r] as number);
+      for (let k = 0; k < m; k++) {
+        const b = bu[r * m + k] as number;
+        if (b === 0) continue;
+        fs += b * (lnx[k] as number);
+        this.calc[k] = (this.calc[k] as number) + b * nr;
+        this.absSum[k] = (this.absSum[k] as number) + Math.abs(b * nr);
+        if (withJacobian) this.dcalc[k * dim + m + r] = b;
+      }
+      this.f[r] = fs;
+      this.dF[r] = dphi * (this.qB[r] as number);
+    }
+    this.ionCalc = ion;
+    if (ionCol >= 0) this.dIon[ionCol] = dIonDs;
+  }
+
+  /** Largest relative mass-balance residual at the last evaluation. */
+  massResidual(): number {
+    let worst = 0;
+    for (let k = 0; k < this.m; k++) {
+      const t = this.T[k] as number;
+      const scale = Math.max(t, this.absSum[k] as number);
+      const r = scale > 0 ? Math.abs((this.calc[k] as number) - t) / scale : 0;
+      if (!(r <= worst)) worst = r;
+    }
+    return worst;
+  }
+
+  private saturationResidual(): number {
+    let worst = 0;
+    for (let r = 0; r < this.p; r++) {
+      const v = Math.abs(this.f[r] as number) / Math.LN10;
+      if (!(v <= worst)) worst = v;
+    }
+    return worst;
+  }
+
+  private ionResidual(): number {
+    if (this.mode !== 'free') return 0;
+    if (!this.ionActive) return Infinity;
+    return Math.abs(this.s * this.s - this.ionCalc) / Math.max(this.ionCalc, 1e-20);
+  }
+
+  /** Puts s = sqrt(I) into the Newton system once the balances are close (I is absurd before). */
+  private maybeActivateIon(): boolean {
+    if (this.mode !== 'free' || this.ionActive || !(this.massResidual() < 1e-2)) return false;
+    this.ionActive = true;
+    this.dim = this.m + this.p + 1;
+    this.s = Math.sqrt(this.ionCalc);
+    return true;
+  }
+
+  private chooseForms(): void {
+    for (let k = 0; k < this.m; k++) {
+      const t = this.T[k] as number;
+      const calc = this.calc[k] as number;
+      this.logForm[k] = this.allPos[k] && t > 0 && calc > 0 ? 1 : 0;
+      this.rowDiv[k] = this.logForm[k] ? calc : Math.max(t, this.absSum[k] as number, 1e-300);
+    }
+  }
+
+  /** Residual vector for the chosen forms; returns its squared norm (Infinity if undefined). */
+  private residualVector(): number {
+    const { m, p } = this;
+    let merit = 0;
+    for (let k = 0; k < m; k++) {
+      const t = this.T[k] as number;
+      const calc = this.calc[k] as number;
+      let g: number;
+      if (this.logForm[k]) {
+        if (!(calc > 0)) return Infinity;
+        g = Math.log(calc / t);
+      } else {
+        g = (calc - t) / (this.rowDiv[k] as number);
+      }
+      this.G[k] = g;
+      merit += g * g;
+    }
+    for (let r = 0; r < p; r++) {
+      const g = this.f[r] as number;
+      this.G[m + r] = g;
+      merit += g * g;
+    }
+    if (this.ionActive) {
+      const g = (this.s * this.s - this.ionCalc) / Math.max(this.s * this.s, this.ionCalc, 1e-20);
+      this.G[m + p] = g;
+      merit += g * g;
+    }
+    return Number.isFinite(merit) ? merit : Infinity;
+  }
+
+  private buildJacobian(): void {
+    const { m, p, dim } = this;
+    for (let k = 0; k < m; k++) {
+      const d = this.logForm[k] ? (this.calc[k] as number) : (this.rowDiv[k] as number);
+      const row = k * dim;
+      for (let q = 0; q < dim; q++) this.J[row + q] = (this.dcalc[row + q] as number) / d;
+    }
+    for (let r = 0; r < p; r++) {
+      const row = (m + r) * dim;
+      for (let q = 0; q < m; q++) this.J[row + q] = this.bu[r * m + q] as number;
+      for (let q = m; q < dim; q++) this.J[row + q] = 0;
+      if (this.ionActive) this.J[row + dim - 1] = this.dF[r] as number;
+    }
+    if (this.ionActive) {
+      const row = (dim - 1) * dim;
+      const d = Math.max(this.s * this.s, this.ionCalc, 1e-20);
+      for (let q = 0; q < dim; q++) this.J[row + q] = -(this.dIon[q] as number) / d;
+      for (let q = m; q < m + p; q++) this.J[row + q] = 0;
+      this.J[row + dim - 1] = (2 * this.s - (this.dIon[dim - 1] as number)) / d;
+    }
+  }
+
+  /** How far the balances are from their totals: max |ln(calc/T)|, or the relative misfit. */
+  private distance(): number {
+    let worst = 0;
+    for (let k = 0; k < this.m; k++) {
+      const t = this.T[k] as number;
+      const calc = this.calc[k] as number;
+      const d = this.allPos[k] && t > 0 ? (calc > 0 ? Math.abs(Math.log(calc / t)) : Infinity) : Math.abs(calc - t) / Math.max(t, this.absSum[k] as number, 1e-300);
+      if (!(d <= worst)) worst = d;
+    }
+    return worst;
+  }
+
+  /**
+   * Start-up relaxation: Gauss-Seidel sweeps of a one-unknown Newton step on each balance (in
+   * log form where all terms are positive). Far from the answer one complex often dominates
+   * several balances at once and the full Jacobian is then nearly singular; these sweeps walk
+   * into the region where full Newton converges fast. Expects a current evaluation.
+   */
+  relax(maxSweeps: number, target: number): void {
+    for (let sweep = 0; sweep < maxSweeps && this.distance() > target; sweep++) {
+      for (let k = 0; k < this.m; k++) {
+        const t = this.T[k] as number;
+        const calc = this.calc[k] as number;
+        const d = this.diag[k] as number;
+        if (!(d > 0)) continue;
+        let delta = this.allPos[k] && t > 0 && calc > 0 ? -Math.log(calc / t) / (d / calc) : -(calc - t) / d;
+        const cap = this.allPos[k] ? 100 : 2.3;
+        delta = Math.max(-cap, Math.min(cap, delta));
+        if (!Number.isFinite(delta)) continue;
+        this.lnx[k] = (this.lnx[k] as number) + delta;
+        this.evaluate(false);
+      }
+    }
+  }
+
+  /** Damped Newton from the current state. */
+  newton(maxIterations: number, tolerance: number): NewtonOutcome {
+    const { m } = this;
+    this.evaluate(false);
+    if (this.distance() > 1) this.relax(40, 0.5);
+    this.maybeActivateIon();
+    this.evaluate(true);
+    let best = Infinity;
+    let stalled = 0;
+    for (let it = 0; it <= maxIterations; it++) {
+      if (this.maybeActivateIon()) this.evaluate(true);
+      const res = this.massResidual();
+      const sat = this.saturationResidual();
+      const ion = this.ionResidual();
+      const satOk = sat <= DEFAULTS.saturationTolerance;
+      if (res <= tolerance && satOk && ion <= tolerance) return { converged: true, singular: false, iterations: it, residual: res };
+      const score = Math.max(res, ion, sat * 1e-2);
+      if (score < best * 0.5) {
+        best = score;
+        stalled = 0;
+      } else if (++stalled >= 4 && res <= DEFAULTS.looseTolerance && ion <= DEFAULTS.looseTolerance && sat <= DEFAULTS.saturationTolerance * 100) {
+        return { converged: true, singular: false, iterations: it, residual: res };
+      }
+      if (it === maxIterations) return { converged: false, singular: false, iterations: it, residual: res };
+      const dim = this.dim;
+      this.chooseForms();
+      const merit = this.residualVector();
+      this.buildJacobian();
+      for (let q = 0; q < dim; q++) this.step[q] = -(this.G[q] as number);
+      if (!solveInPlace(this.J, this.step, dim)) return { converged: false, singular: true, iterations: it, residual: res };
+      let biggest = 0;
+      for (let k = 0; k < m; k++) biggest = Math.max(biggest, Math.abs(this.step[k] as number));
+      if (!Number.isFinite(biggest)) return { converged: false, singular: true, iterations: it, residual: res };
+      let lambda = biggest > DEFAULTS.maxLnStep ? DEFAULTS.maxLnStep / biggest : 1;
+      for (let k = 0; k < m; k++) this.saveLnx[k] = this.lnx[k] as number;
+      for (let r = 0; r < this.p; r++) this.saveN[r] = this.n[r] as number;
+      const s0 = this.s;
+      for (let bt = 0; ; bt++) {
+        for (let k = 0; k < m; k++) this.lnx[k] = (this.saveLnx[k] as number) + lambda * (this.step[k] as number);
+        for (let r = 0; r < this.p; r++) this.n[r] = (this.saveN[r] as number) + lambda * (this.step[m + r] as number);
+        if (this.ionActive) this.s = Math.max(0.5 * s0, s0 + lambda * (this.step[dim - 1] as number));
+        this.evaluate(true);
+        const trial = this.residualVector();
+        if (trial < merit || bt >= DEFAULTS.maxBacktracks) break;
+        lambda *= 0.5;
+      }
+      this.trace?.push({ iteration: this.trace.length + 1, residual: res, step: lambda * biggest, solids: this.presentList().map((s) => this.tab.solidNames[s] as string) });
+    }
+    return { converged: false, singular: false, iterations: maxIterations, residual: Infinity };
+  }
+
+  /**
+   * Bracketing fallback: Gauss-Seidel sweeps, each solving one mass balance for its own
+   * ln(free concentration) by bracketing and the Illinois false-position method, with the other
+   * unknowns, the solid amounts and the ionic strength held. Each balance is monotone in its own
+   * unknown, so a bracket always exists.
+   */
+  bracketSweeps(sweeps: number): void {
+    for (let r = 0; r < this.p; r++) this.n[r] = Math.max(0, this.n[r] as number);
+    for (let sweep = 0; sweep < sweeps; sweep++) {
+      let moved = 0;
+      for (let k = 0; k < this.m; k++) {
+        const before = this.lnx[k] as number;
+        this.solveOne(k);
+        moved = Math.max(moved, Math.abs((this.lnx[k] as number) - before));
+      }
+      if (this.mode === 'free') this.s = Math.sqrt(this.ionCalc);
+      if (moved < 1e-9) break;
+    }
+  }
+
+  private balanceAt(k: number, v: number): number {
+    this.lnx[k] = v;
+    this.evaluate(false);
+    const t = this.T[k] as number;
+    const calc = this.calc[k] as number;
+    if (this.allPos[k] && t > 0) return calc > 0 ? Math.log(calc / t) : -Infinity;
+    return (calc - t) / Math.max(t, this.absSum[k] as number, 1e-300);
+  }
+
+  private solveOne(k: number): void {
+    const floor = -3 * MAX_LN;
+    let a = this.lnx[k] as number;
+    let fa = this.balanceAt(k, a);
+    if (fa === 0) return;
+    let b = a;
+    let fb = fa;
+    const dir = fa > 0 ? -1 : 1;
+    for (let width = 1, n = 0; Math.sign(fb) === Math.sign(fa) && n < 60; width *= 2, n++) {
+      a = b;
+      fa = fb;
+      b = Math.min(MAX_LN, Math.max(floor, b + dir * width));
+      fb = this.balanceAt(k, b);
+      if (b === MAX_LN || b === floor) break;
+    }
+    if (Math.sign(fb) === Math.sign(fa)) return;
+    let side = 0;
+    for (let i = 0; i < 100 && Math.abs(b - a) > 1e-13 * Math.max(1, Math.abs(b)); i++) {
+      let mid = (a * fb - b * fa) / (fb - fa);
+      if (!Number.isFinite(mid) || mid <= Math.min(a, b) || mid >= Math.max(a, b)) mid = 0.5 * (a + b);
+      const fm = this.balanceAt(k, mid);
+      if (fm === 0) return;
+      if (Math.sign(fm) === Math.sign(fb)) {
+        b = mid;
+        fb = fm;
+        if (side === -1) fa /= 2;
+        side = -1;
+      } else {
+        a = mid;
+        fa = fm;
+        if (side === 1) fb /= 2;
+        side = 1;
+      }
+    }
+    this.lnx[k] = Math.abs(fa) < Math.abs(fb) ? a : b;
+    this.evaluate(false);
+  }
+}
+
+const pool = new Map<string, Assemblage>();
+
+/**
+ * A work space configured for this tableau and set of solids. Spaces are pooled by size and
+ * reused (solves are synchronous, so one at a time): only the most recently configured space of
+ * a size is valid, and callers copy what they keep.
+ */
+export function assemblageFor(tab: Tableau, absent: ArrayLike<number>, present: readonly number[]): Assemblage {
+  const key = `${tab.nc},${tab.ns},${tab.nsol}`;
+  let space = pool.get(key);
+  if (!space) {
+    if (pool.size >= 32) pool.clear();
+    space = new Assemblage(tab.nc, tab.ns, tab.nsol);
+    pool.set(key, space);
+  }
+  return space.configure(tab, absent, present);
+}

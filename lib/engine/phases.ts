@@ -1,0 +1,255 @@
+// Which solids are present: the phase-rule loop. Solve with a set of solids; drop the one whose
+// amount comes out most negative; else add the most supersaturated absent solid; repeat until
+// neither applies. A set met twice means the loop cycles; then subsets of the solids involved are
+// tried, smallest first, and the first consistent one is taken.
+
+import { DEFAULTS } from './defaults';
+import { type Assemblage, assemblageFor, type NewtonOutcome, type TraceLine } from './newton';
+import type { Tableau } from './tableau';
+
+/** State carried from one solve to the next (curves start each point from the last). */
+export interface WarmStart {
+  /** ln(free concentration) per component. */
+  lnx: number[];
+  /** Amount of each solid, mol/L. */
+  n: number[];
+  present: number[];
+  ionicStrength: number;
+}
+
+/** What the loop settles on. */
+export interface PhaseOutcome {
+  asm: Assemblage;
+  converged: boolean;
+  message?: string;
+  iterations: number;
+  absent: number[];
+  possible: number[];
+  state: WarmStart;
+}
+
+const SUPERSATURATED = 1e-12;
+const NEGATIVE_AMOUNT = 1e-14;
+
+/** Components that cannot exist: a zero total and no species that consumes them. */
+function findAbsent(tab: Tableau): number[] {
+  const absent = new Array<number>(tab.nc).fill(0);
+  for (let j = 0; j < tab.nc; j++) {
+    if (tab.fixed[j] || tab.total[j] !== 0) continue;
+    let consumes = false;
+    for (let i = 0; i < tab.ns; i++) if ((tab.a[i * tab.nc + j] as number) < 0) consumes = true;
+    absent[j] = consumes ? 0 : 1;
+  }
+  return absent;
+}
+
+/** Saturation index log10(IAP/Ksp) of solid s at the assemblage's current state. */
+export function saturationIndex(asm: Assemblage, s: number): number {
+  const { tab } = asm;
+  let lnIap = 0;
+  for (let j = 0; j < tab.nc; j++) {
+    const b = tab.b[s * tab.nc + j] as number;
+    if (b === 0) continue;
+    const k = asm.componentRow[j] as number;
+    let lnx: number;
+    if (k >= 0) lnx = asm.lnx[k] as number;
+    else if (tab.fixed[j]) lnx = tab.fixedLn[j] as number;
+    else return -Infinity;
+    lnIap += b * (lnx + asm.lnGammaComponent(j));
+  }
+  return (lnIap - (tab.lnKsp[s] as number)) / Math.LN10;
+}
+
+function coldStart(tab: Tableau): WarmStart {
+  const lnx: number[] = [];
+  for (let j = 0; j < tab.nc; j++) {
+    const t = tab.total[j] as number;
+    lnx.push(Math.log(t > 0 ? t : 1e-7));
+  }
+  return { lnx, n: new Array<number>(tab.nsol).fill(0), present: [], ionicStrength: 0 };
+}
+
+class PhaseLoop {
+  iterations = 0;
+  trace: TraceLine[] | null;
+  constructor(
+    readonly tab: Tableau,
+    readonly absent: number[],
+    readonly possible: number[],
+    readonly tolerance: number,
+    readonly maxIterations: number,
+    public cur: WarmStart,
+    wantTrace: boolean,
+  ) {
+    this.trace = wantTrace ? [] : null;
+  }
+
+  attempt(present: number[]): { asm: Assemblage; out: NewtonOutcome } {
+    const asm = assemblageFor(this.tab, this.absent, present);
+    asm.trace = this.trace;
+    for (let k = 0; k < asm.m; k++) {
+      const v = this.cur.lnx[asm.u[k] as number] as number;
+      asm.lnx[k] = Number.isFinite(v) ? v : Math.log(1e-7);
+    }
+    present.forEach((s, r) => (asm.n[r] = this.cur.n[s] as number));
+    asm.setIonicStrength(this.cur.ionicStrength);
+    let out = asm.newton(this.maxIterations, this.tolerance);
+    this.iterations += out.iterations;
+    if (!out.converged) {
+      asm.bracketSweeps(DEFAULTS.fallbackSweeps);
+      out = asm.newton(this.maxIterations * 2, this.tolerance);
+      this.iterations += out.iterations;
+    }
+    return { asm, out };
+  }
+
+  save(asm: Assemblage): void {
+    const lnx = Array.from(this.cur.lnx);
+    for (let k = 0; k < asm.m; k++) lnx[asm.u[k] as number] = asm.lnx[k] as number;
+    const n = new Array<number>(this.tab.nsol).fill(0);
+    for (let r = 0; r < asm.p; r++) n[asm.present[r] as number] = asm.n[r] as number;
+    this.cur = { lnx, n, present: asm.presentList(), ionicStrength: asm.ionicStrength };
+  }
+
+  /** Index (within asm.present) of the most negative solid amount, or -1. */
+  mostNegative(asm: Assemblage): number {
+    let worst = -1;
+    let worstValue = 0;
+    for (let r = 0; r < asm.p; r++) {
+      const rel = (asm.n[r] as number) / this.amountScale(asm.present[r] as number);
+      if (rel < -NEGATIVE_AMOUNT && rel < worstValue) {
+        worst = r;
+        worstValue = rel;
+      }
+    }
+    return worst;
+  }
+
+  /** Largest mol/L of solid s the totals could make; a scale for "negligibly negative". */
+  amountScale(s: number): number {
+    let scale = Infinity;
+    for (let j = 0; j < this.tab.nc; j++) {
+      const b = this.tab.b[s * this.tab.nc + j] as number;
+      if (b > 0 && !this.tab.fixed[j]) scale = Math.min(scale, (this.tab.total[j] as number) / b);
+    }
+    return Number.isFinite(scale) && scale > 0 ? scale : 1;
+  }
+
+  /** The most supersaturated possible solid not in the set, excluding some, or -1. */
+  mostSupersaturated(asm: Assemblage, exclude: Set<number>): number {
+    let best = -1;
+    let bestSi = SUPERSATURATED;
+    const inSet = new Set(asm.presentList());
+    for (let s = 0; s < this.tab.nsol; s++) {
+      if (!this.possible[s] || inSet.has(s) || exclude.has(s)) continue;
+      const si = saturationIndex(asm, s);
+      if (si > bestSi) {
+        best = s;
+        bestSi = si;
+      }
+    }
+    return best;
+  }
+
+  consistent(asm: Assemblage, out: NewtonOutcome): boolean {
+    return out.converged && this.mostNegative(asm) < 0 && this.mostSupersaturated(asm, new Set()) < 0;
+  }
+
+  /** Tries subsets of the solids involved, smallest first; the first consistent one wins. */
+  search(candidates: number[]): { asm: Assemblage; out: NewtonOutcome } | null {
+    const list = candidates.slice(0, 12);
+    const start = this.cur;
+    const subsets: number[][] = [];
+    for (let mask = 0; mask < 1 << list.length; mask++) subsets.push(list.filter((_, i) => mask & (1 << i)));
+    subsets.sort((x, y) => x.length - y.length);
+    for (const subset of subsets) {
+      this.cur = start;
+      const tried = this.attempt(subset);
+      if (this.consistent(tried.asm, tried.out)) return tried;
+    }
+    this.cur = start;
+    return null;
+  }
+}
+
+function clampNegligible(asm: Assemblage): void {
+  for (let r = 0; r < asm.p; r++) if ((asm.n[r] as number) < 0) asm.n[r] = 0;
+}
+
+/** Runs the phase-rule loop from a warm or cold start. */
+export function settlePhases(tab: Tableau, opts: { tolerance: number; maxIterations: number; trace: boolean }, warm?: WarmStart): PhaseOutcome & { trace: TraceLine[] | null } {
+  const absent = findAbsent(tab);
+  const possible = new Array<number>(tab.nsol).fill(0);
+  for (let s = 0; s < tab.nsol; s++) {
+    possible[s] = 1;
+    for (let j = 0; j < tab.nc; j++) if (absent[j] && tab.b[s * tab.nc + j] !== 0) possible[s] = 0;
+  }
+  const start = warm && warm.lnx.length === tab.nc ? warm : coldStart(tab);
+  const loop = new PhaseLoop(tab, absent, possible, opts.tolerance, opts.maxIterations, start, opts.trace);
+  let present = start.present.filter((s) => s < tab.nsol && possible[s]);
+  const visited = new Set<string>();
+  const involved = new Set<number>(present);
+  const blocked = new Set<number>();
+  let lastAdded = -1;
+  const finish = (asm: Assemblage, converged: boolean, message?: string) => {
+    if (converged) clampNegligible(asm);
+    loop.save(asm);
+    return { asm, converged, message, iterations: loop.iterations, absent, possible, state: loop.cur, trace: loop.trace };
+  };
+
+  for (let change = 0; change <= DEFAULTS.maxPhaseChanges; change++) {
+    const key = [...present].sort((x, y) => x - y).join(',');
+    if (visited.has(key)) {
+      const found = loop.search([...involved]);
+      if (found) return finish(found.asm, true);
+      const last = loop.attempt(present);
+      return finish(last.asm, false, 'The set of solids present did not settle (the phase-rule loop cycled and no consistent set was found).');
+    }
+    visited.add(key);
+    let { asm, out } = loop.attempt(present);
+    if (!out.converged && out.singular && lastAdded >= 0) {
+      // The added solid is not independent of those present: try it in place of each of them.
+      const others = present.filter((s) => s !== lastAdded);
+      let swapped = false;
+      for (const t of others) {
+        const trial = loop.attempt(present.filter((s) => s !== t));
+        if (trial.out.converged) {
+          ({ asm, out } = trial);
+          present = present.filter((s) => s !== t);
+          visited.add([...present].sort((x, y) => x - y).join(','));
+          swapped = true;
+          break;
+        }
+      }
+      if (!swapped) {
+        blocked.add(lastAdded);
+        present = present.filter((s) => s !== lastAdded);
+        lastAdded = -1;
+        continue;
+      }
+    }
+    if (!out.converged) {
+      return finish(asm, false, `Newton iteration did not converge (relative mass-balance residual ${out.residual.toExponential(2)} after ${loop.iterations} iterations).`);
+    }
+    loop.save(asm);
+    const neg = loop.mostNegative(asm);
+    if (neg >= 0) {
+      present = present.filter((s) => s !== asm.present[neg]);
+      lastAdded = -1;
+      continue;
+    }
+    const add = loop.mostSupersaturated(asm, blocked);
+    if (add >= 0) {
+      present = [...present, add];
+      involved.add(add);
+      lastAdded = add;
+      continue;
+    }
+    if (blocked.size > 0 && loop.mostSupersaturated(asm, new Set()) >= 0) {
+      return finish(asm, false, 'A supersaturated solid could not be added: its formula is not independent of the solids present (phase rule).');
+    }
+    return finish(asm, true);
+  }
+  const last = loop.attempt(present);
+  return finish(last.asm, false, 'The set of solids present did not settle within the allowed number of changes.');
+}

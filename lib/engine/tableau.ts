@@ -1,0 +1,303 @@
+// Checks a problem in the general form and compiles it into the tableau the solver works on:
+// components as columns, species and solids as rows of stoichiometric coefficients, constants as
+// natural logs corrected to the solution temperature.
+
+import { chargeFromName } from './charge';
+import { DEFAULTS } from './defaults';
+import { EngineInputError } from './errors';
+import { daviesA, vantHoff } from './temperature';
+import type { ActivityModel, Problem, SolidInput, SpeciesInput } from './types';
+
+/** The compiled problem. Arrays are row-major: a[i * nc + j] is species i's count of component j. */
+export interface Tableau {
+  nc: number;
+  components: string[];
+  componentCharge: number[];
+  /** 1 where the component's free concentration is fixed. */
+  fixed: number[];
+  /** Analytical total, mol/L (0 for fixed components). */
+  total: number[];
+  /** ln of the fixed free concentration (0 for components with totals). */
+  fixedLn: number[];
+  ns: number;
+  speciesNames: string[];
+  speciesCharge: number[];
+  lnK: number[];
+  a: number[];
+  nsol: number;
+  solidNames: string[];
+  lnKsp: number[];
+  b: number[];
+  activity: ActivityModel;
+  temperatureC: number;
+  /** Davies A at the solution temperature. */
+  daviesA: number;
+  /** Ionic strength held fixed, mol/L, or null to compute it. */
+  fixedIonicStrength: number | null;
+  /** Cautions known before solving (constants used at another temperature). */
+  warnings: string[];
+}
+
+type Obj = Record<string, unknown>;
+
+function isObject(value: unknown): value is Obj {
+  return typeof value === 'object' && value !== null && !Array.isArray(value);
+}
+
+function finite(value: unknown, field: string, what: string): number {
+  if (typeof value !== 'number' || !Number.isFinite(value)) {
+    throw new EngineInputError(field, `${what} must be a finite number, got ${describe(value)}`);
+  }
+  return value;
+}
+
+function describe(value: unknown): string {
+  if (typeof value === 'number') return String(value);
+  if (value === null) return 'null';
+  if (typeof value === 'string') return JSON.stringify(value);
+  return typeof value;
+}
+
+function readComponents(problem: Obj): { components: string[]; index: Map<string, number> } {
+  const list = problem.components;
+  if (!Array.isArray(list) || list.length === 0) {
+    throw new EngineInputError('components', 'give a non-empty list of component names such as ["Ag+", "CN-", "H+"]');
+  }
+  const index = new Map<string, number>();
+  for (let i = 0; i < list.length; i++) {
+    const name: unknown = list[i];
+    if (typeof name !== 'string' || name.trim() === '') {
+      throw new EngineInputError(`components[${i}]`, 'a component name must be a non-empty string');
+    }
+    if (index.has(name)) throw new EngineInputError(`components[${i}]`, `duplicate component "${name}"`);
+    index.set(name, i);
+  }
+  return { components: list as string[], index };
+}
+
+/** Reads totals (mol/L, at least 0) or fixed free concentrations (above 0) into `into`; marks `seen`. */
+function readAmounts(problem: Obj, key: 'totals' | 'fixed', index: Map<string, number>, into: number[], seen: number[]): void {
+  const raw = problem[key];
+  if (raw === undefined) return;
+  if (!isObject(raw)) throw new EngineInputError(key, 'must be an object of component name to mol/L');
+  for (const name in raw) {
+    const value = raw[name];
+    const j = index.get(name);
+    const v = typeof value === 'number' && Number.isFinite(value) ? value : NaN;
+    if (j === undefined || !(key === 'totals' ? v >= 0 : v > 0)) {
+      const field = `${key}.${name}`;
+      if (j === undefined) throw new EngineInputError(field, `"${name}" is not one of the components`);
+      finite(value, field, key === 'totals' ? 'a total' : 'a fixed free concentration');
+      if (key === 'totals') throw new EngineInputError(field, `a total cannot be negative (got ${v} mol/L)`);
+      throw new EngineInputError(field, `a fixed free concentration must be above 0 mol/L (got ${v})`);
+    }
+    into[j] = key === 'totals' ? v : Math.log(v);
+    seen[j] = 1;
+  }
+}
+
+interface Reaction {
+  name: string;
+  logK: number;
+  row: number[];
+  charge: number;
+}
+
+interface ReadContext {
+  index: Map<string, number>;
+  nc: number;
+  temperatureC: number;
+  stale: string[];
+}
+
+function readStoich(raw: unknown, where: () => string, ctx: ReadContext): number[] {
+  if (!isObject(raw)) throw new EngineInputError(`${where()}.stoich`, 'must be an object of component name to count');
+  const row = new Array<number>(ctx.nc).fill(0);
+  let any = false;
+  for (const name in raw) {
+    const j = ctx.index.get(name);
+    if (j === undefined) {
+      throw new EngineInputError(`${where()}.stoich.${name}`, `unknown component "${name}"; add it to components or fix the name`);
+    }
+    const value = raw[name];
+    row[j] = typeof value === 'number' && Number.isFinite(value) ? value : finite(value, `${where()}.stoich.${name}`, 'a stoichiometric coefficient');
+    if (row[j] !== 0) any = true;
+  }
+  if (!any) throw new EngineInputError(`${where()}.stoich`, 'needs at least one component with a non-zero coefficient');
+  return row;
+}
+
+function readReaction(raw: unknown, list: 'species' | 'solids', i: number, ctx: ReadContext): Reaction {
+  const where = () => `${list}[${i}]`;
+  const key = list === 'solids' ? 'logKsp' : 'logK';
+  if (!isObject(raw)) throw new EngineInputError(where(), `must be an object with name, ${key} and stoich`);
+  const { name } = raw;
+  if (typeof name !== 'string' || name.trim() === '') throw new EngineInputError(`${where()}.name`, 'must be a non-empty string');
+  const rawK = raw[key];
+  let logK = typeof rawK === 'number' && Number.isFinite(rawK) ? rawK : finite(rawK, `${where()}.${key}`, list === 'solids' ? 'log Ksp' : 'log K');
+  const row = readStoich(raw.stoich, where, ctx);
+  const refC = raw.temperatureC === undefined ? DEFAULTS.referenceTemperatureC : finite(raw.temperatureC, `${where()}.temperatureC`, 'a temperature');
+  if (raw.deltaH !== undefined) {
+    const dh = finite(raw.deltaH, `${where()}.deltaH`, 'an enthalpy in kJ/mol');
+    logK = vantHoff(logK, dh, refC, ctx.temperatureC);
+  } else if (Math.abs(refC - ctx.temperatureC) > 0.5) {
+    ctx.stale.push(name);
+  }
+  let charge = chargeFromName(name);
+  if (list === 'species' && raw.charge !== undefined) charge = finite(raw.charge, `${where()}.charge`, 'a charge');
+  return { name, logK, row, charge };
+}
+
+function readList(problem: Obj, key: 'species' | 'solids'): unknown[] {
+  const raw = problem[key];
+  if (raw === undefined) return [];
+  if (!Array.isArray(raw)) throw new EngineInputError(key, 'must be a list');
+  return raw;
+}
+
+function readActivity(problem: Obj): ActivityModel {
+  const raw = problem.activity;
+  if (raw === undefined) return 'ideal';
+  const v = typeof raw === 'string' ? raw.toLowerCase() : raw;
+  if (v !== 'ideal' && v !== 'davies') throw new EngineInputError('activity', `must be "ideal" or "davies", got ${describe(raw)}`);
+  return v;
+}
+
+function readTemperature(input: Obj): number {
+  if (input.temperatureC === undefined) return DEFAULTS.referenceTemperatureC;
+  const t = finite(input.temperatureC, 'temperatureC', 'the temperature');
+  if (t < -5 || t > 150) throw new EngineInputError('temperatureC', `must lie between -5 and 150 C for water, got ${t}`);
+  return t;
+}
+
+function readIonicStrength(input: Obj): number | null {
+  if (input.ionicStrength === undefined) return null;
+  const v = finite(input.ionicStrength, 'ionicStrength', 'a fixed ionic strength');
+  if (v < 0) throw new EngineInputError('ionicStrength', `cannot be negative (got ${v} mol/L)`);
+  return v;
+}
+
+/** True when name occurs in names[0..upto). Lists are short; a scan beats building a set. */
+function occursBefore(names: readonly Reaction[], name: string, upto: number): boolean {
+  for (let k = 0; k < upto; k++) if ((names[k] as Reaction).name === name) return true;
+  return false;
+}
+
+/** Checks a problem and compiles it; throws EngineInputError naming the field at fault. */
+export function compileProblem(input: Problem | unknown): Tableau {
+  if (!isObject(input)) throw new EngineInputError('problem', 'must be a JSON object with components, totals, species and solids');
+  const { components, index } = readComponents(input);
+  const nc = components.length;
+  const total = new Array<number>(nc).fill(0);
+  const fixedLn = new Array<number>(nc).fill(0);
+  const hasTotal = new Array<number>(nc).fill(0);
+  const fixed = new Array<number>(nc).fill(0);
+  readAmounts(input, 'totals', index, total, hasTotal);
+  readAmounts(input, 'fixed', index, fixedLn, fixed);
+  for (let j = 0; j < nc; j++) {
+    const name = components[j] as string;
+    if (hasTotal[j] && fixed[j]) throw new EngineInputError(`fixed.${name}`, `"${name}" has both a total and a fixed free concentration; give one`);
+    if (!hasTotal[j] && !fixed[j]) throw new EngineInputError(`totals.${name}`, `component "${name}" needs a total (mol/L) or a fixed free concentration`);
+  }
+  const temperatureC = readTemperature(input);
+  const activity = readActivity(input);
+  const ctx: ReadContext = { index, nc, temperatureC, stale: [] };
+
+  const rawSpecies = readList(input, 'species');
+  const species: Reaction[] = [];
+  for (let i = 0; i < rawSpecies.length; i++) {
+    const r = readReaction(rawSpecies[i], 'species', i, ctx);
+    if (index.has(r.name) || occursBefore(species, r.name, i)) {
+      throw new EngineInputError(`species[${i}].name`, `duplicate name "${r.name}" (components and species share one list of names)`);
+    }
+    species.push(r);
+  }
+  const rawSolids = readList(input, 'solids');
+  const solids: Reaction[] = [];
+  for (let i = 0; i < rawSolids.length; i++) {
+    const r = readReaction(rawSolids[i], 'solids', i, ctx);
+    if (occursBefore(solids, r.name, i)) throw new EngineInputError(`solids[${i}].name`, `duplicate solid "${r.name}"`);
+    if (!r.row.some((v, j) => v !== 0 && !fixed[j])) {
+      throw new EngineInputError(`solids[${i}].stoich`, `"${r.name}" is made only of fixed components; at least one of its components needs a total`);
+    }
+    solids.push(r);
+  }
+  const fixedIonicStrength = readIonicStrength(input);
+
+  const warnings: string[] = [];
+  if (ctx.stale.length > 0) {
+    warnings.push(`Constants for ${ctx.stale.join(', ')} are for another temperature and have no enthalpy; they are used as given at ${temperatureC} C.`);
+  }
+  if (activity === 'davies' && Math.abs(temperatureC - 25) > 0.5) {
+    warnings.push(`Davies A is scaled from 0.509 at 25 C to ${temperatureC} C through the permittivity of water.`);
+  }
+
+  const ns = species.length;
+  const nsol = solids.length;
+  const a = new Array<number>(ns * nc);
+  const lnK = new Array<number>(ns);
+  const speciesCharge = new Array<number>(ns);
+  const speciesNamesList = new Array<string>(ns);
+  for (let i = 0; i < ns; i++) {
+    const sp = species[i] as Reaction;
+    for (let j = 0; j < nc; j++) a[i * nc + j] = sp.row[j] as number;
+    lnK[i] = sp.logK * Math.LN10;
+    speciesCharge[i] = sp.charge;
+    speciesNamesList[i] = sp.name;
+  }
+  const b = new Array<number>(nsol * nc);
+  const lnKsp = new Array<number>(nsol);
+  const solidNamesList = new Array<string>(nsol);
+  for (let s = 0; s < nsol; s++) {
+    const so = solids[s] as Reaction;
+    for (let j = 0; j < nc; j++) b[s * nc + j] = so.row[j] as number;
+    lnKsp[s] = so.logK * Math.LN10;
+    solidNamesList[s] = so.name;
+  }
+  const componentCharge = new Array<number>(nc);
+  for (let j = 0; j < nc; j++) componentCharge[j] = chargeFromName(components[j] as string);
+
+  return {
+    nc,
+    components,
+    componentCharge,
+    fixed,
+    total,
+    fixedLn,
+    ns,
+    speciesNames: speciesNamesList,
+    speciesCharge,
+    lnK,
+    a,
+    nsol,
+    solidNames: solidNamesList,
+    lnKsp,
+    b,
+    activity,
+    temperatureC,
+    daviesA: daviesA(DEFAULTS.daviesA, temperatureC),
+    fixedIonicStrength,
+    warnings,
+  };
+}
+
+/** A copy of a compiled tableau with some totals or fixed free concentrations changed (mol/L). */
+export function retarget(tab: Tableau, change: { totals?: Record<string, number>; fixed?: Record<string, number> }): Tableau {
+  const total = Array.from(tab.total);
+  const fixedLn = Array.from(tab.fixedLn);
+  for (const [name, v] of Object.entries(change.totals ?? {})) {
+    const j = tab.components.indexOf(name);
+    if (j < 0 || tab.fixed[j]) throw new EngineInputError(`totals.${name}`, `"${name}" is not a component with a total`);
+    if (!Number.isFinite(v) || v < 0) throw new EngineInputError(`totals.${name}`, `a total must be a finite number of at least 0 mol/L, got ${v}`);
+    total[j] = v;
+  }
+  for (const [name, v] of Object.entries(change.fixed ?? {})) {
+    const j = tab.components.indexOf(name);
+    if (j < 0 || !tab.fixed[j]) throw new EngineInputError(`fixed.${name}`, `"${name}" is not a fixed component`);
+    if (!Number.isFinite(v) || v <= 0) throw new EngineInputError(`fixed.${name}`, `a fixed free concentration must be above 0 mol/L, got ${v}`);
+    fixedLn[j] = Math.log(v);
+  }
+  return { ...tab, total, fixedLn };
+}
+
+export type { SpeciesInput, SolidInput };
