@@ -8,7 +8,7 @@ export const DEFAULTS = {
   daviesLimitI: 0.5,
   /** Largest relative mass-balance residual accepted as converged (dimensionless). */
   tolerance: 1e-12,
-  /** Residual accepted when round-off stops further progress (dimensionless). */
+  /** Residual accepted by the fallbacks when round-off stops further progress (dimensionless). */
   looseTolerance: 1e-11,
   /** Largest |log10(IAP/Ksp)| accepted for a solid present at equilibrium. */
   saturationTolerance: 1e-11,
@@ -22,6 +22,8 @@ export const DEFAULTS = {
   maxBacktracks: 6,
   /** Assemblages of solids tried before giving up. */
   maxPhaseChanges: 40,
+  /** Newton iterations allowed for one solve in all, fallbacks and phase search included. */
+  iterationBudget: 4000,
   /** Gauss-Seidel sweeps of one-dimensional root finding in the bracketing fallback. */
   fallbackSweeps: 60,
   /** Temperature, degrees Celsius, at which constants are taken when none is given. */

@@ -13,7 +13,7 @@
 
 import { daviesPhi, daviesPhiSlope } from './activity';
 import { DEFAULTS } from './defaults';
-import { solveInPlace } from './linear';
+import { rowsIndependent, solveInPlace } from './linear';
 import type { Tableau } from './tableau';
 
 const MAX_LN = 700;
@@ -51,6 +51,8 @@ export class Assemblage {
   private readonly au: Float64Array;
   private readonly bu: Float64Array;
   private readonly allPos: Uint8Array;
+  /** 1 where a present solid contains the unknown's component. */
+  private readonly hasSolid: Uint8Array;
   private readonly T: Float64Array;
   private readonly base0: Float64Array;
   private readonly sbase0: Float64Array;
@@ -59,9 +61,26 @@ export class Assemblage {
   private readonly z2U: Float64Array;
   private readonly qB: Float64Array;
   private fixedIon = 0;
+  /** Whether the present solids' formulas are independent over the unknowns (else the phase rule is broken). */
+  private solidsIndependent = true;
   /** 'ideal': gamma 1; 'held': I fixed by the problem; 'free': I solved with the rest. */
   private mode: 'ideal' | 'held' | 'free' = 'ideal';
   private ionActive = false;
+  /**
+   * Whether balances with a solid term may take the log form. Off by default: the linear form
+   * handles a solid taking up most of a total in few steps. On as a fallback: the log form
+   * handles a solid taking up nearly all of two totals at once (a stoichiometric point), where
+   * the linear form crawls one e-fold per iteration.
+   */
+  solidLogForm = false;
+  /**
+   * Fallback for sets without solids: every balance linear, and steps judged by the convex
+   * function F = sum(c) - sum(T ln x), whose gradient is the mass-balance residual and whose
+   * Hessian is positive definite, so that damped Newton cannot stall.
+   */
+  linearOnly = false;
+  /** Set while the ionic-strength fallback holds s and solves the rest around it. */
+  private ionHeld = false;
   // state
   readonly lnx: Float64Array;
   readonly n: Float64Array;
@@ -71,6 +90,8 @@ export class Assemblage {
   readonly c: Float64Array;
   readonly x: Float64Array;
   private readonly calc: Float64Array;
+  /** Sum of b n over the present solids, per unknown. */
+  private readonly solidPart: Float64Array;
   private readonly absSum: Float64Array;
   private readonly diag: Float64Array;
   private ionCalc = 0;
@@ -99,6 +120,7 @@ export class Assemblage {
     this.au = new Float64Array(ns * nc);
     this.bu = new Float64Array(nsol * nc);
     this.allPos = new Uint8Array(nc);
+    this.hasSolid = new Uint8Array(nc);
     this.T = new Float64Array(nc);
     this.base0 = new Float64Array(ns);
     this.sbase0 = new Float64Array(nsol);
@@ -111,6 +133,7 @@ export class Assemblage {
     this.c = new Float64Array(ns);
     this.x = new Float64Array(nc);
     this.calc = new Float64Array(nc);
+    this.solidPart = new Float64Array(nc);
     this.absSum = new Float64Array(nc);
     this.diag = new Float64Array(nc);
     this.f = new Float64Array(nsol);
@@ -139,6 +162,7 @@ export class Assemblage {
         this.T[m] = tab.total[j] as number;
         this.z2U[m] = (componentCharge[j] as number) ** 2;
         this.allPos[m] = 1;
+        this.hasSolid[m] = 0;
         m++;
       } else {
         this.componentRow[j] = -1;
@@ -194,7 +218,7 @@ export class Assemblage {
         const k = this.componentRow[j] as number;
         if (k >= 0) {
           this.bu[r * m + k] = bj;
-          if (bj < 0) this.allPos[k] = 0;
+          this.hasSolid[k] = 1;
         }
       }
       this.sbase0[r] = base;
@@ -202,8 +226,12 @@ export class Assemblage {
       this.n[r] = 0;
     }
     this.p = p;
+    this.solidsIndependent = p === 0 || rowsIndependent(this.bu, p, m, this.J);
     this.mode = tab.activity === 'ideal' ? 'ideal' : tab.fixedIonicStrength !== null ? 'held' : 'free';
     this.ionActive = false;
+    this.ionHeld = false;
+    this.solidLogForm = false;
+    this.linearOnly = false;
     this.dim = m + p;
     this.s = 0;
     return this;
@@ -255,6 +283,7 @@ export class Assemblage {
       const xv = Math.exp(v > MAX_LN ? MAX_LN : v);
       this.x[k] = xv;
       this.calc[k] = xv;
+      this.solidPart[k] = 0;
       this.absSum[k] = xv;
       this.diag[k] = xv;
       ion += 0.5 * (this.z2U[k] as number) * xv;
@@ -303,6 +332,7 @@ export class Assemblage {
         if (b === 0) continue;
         fs += b * (lnx[k] as number);
         this.calc[k] = (this.calc[k] as number) + b * nr;
+        this.solidPart[k] = (this.solidPart[k] as number) + b * nr;
         this.absSum[k] = (this.absSum[k] as number) + Math.abs(b * nr);
         if (withJacobian) this.dcalc[k * dim + m + r] = b;
       }
@@ -311,6 +341,25 @@ export class Assemblage {
     }
     this.ionCalc = ion;
     if (ionCol >= 0) this.dIon[ionCol] = dIonDs;
+  }
+
+  /**
+   * ln(dissolved / (total - solids)) for a balance whose dissolved terms are all positive, or NaN
+   * when that form does not apply (a negative coefficient, or solids claiming the whole total).
+   */
+  private logMisfit(k: number, forNewton = true): number {
+    if (!this.allPos[k] || (forNewton && this.linearOnly) || (!this.solidLogForm && this.hasSolid[k])) return NaN;
+    const rhs = (this.T[k] as number) - (this.solidPart[k] as number);
+    const dissolved = (this.calc[k] as number) - (this.solidPart[k] as number);
+    return rhs > 0 && dissolved > 0 ? Math.log(dissolved / rhs) : NaN;
+  }
+
+  /** F = sum of all dissolved concentrations - sum(T ln x) over the unknowns (a convex function). */
+  private potential(): number {
+    let f = 0;
+    for (let r = 0; r < this.nl; r++) f += this.c[r] as number;
+    for (let k = 0; k < this.m; k++) f += (this.x[k] as number) - (this.T[k] as number) * (this.lnx[k] as number);
+    return f;
   }
 
   /** Largest relative mass-balance residual at the last evaluation. */
@@ -335,26 +384,34 @@ export class Assemblage {
   }
 
   private ionResidual(): number {
-    if (this.mode !== 'free') return 0;
+    if (this.mode !== 'free' || this.ionHeld) return 0;
     if (!this.ionActive) return Infinity;
     return Math.abs(this.s * this.s - this.ionCalc) / Math.max(this.ionCalc, 1e-20);
   }
 
-  /** Puts s = sqrt(I) into the Newton system once the balances are close (I is absurd before). */
+  /**
+   * Puts s = sqrt(I) into the Newton system once the balances are met at the current activity
+   * coefficients: far from the answer I is absurd, and the coupled system is best started from
+   * a solution at fixed activity coefficients.
+   */
   private maybeActivateIon(): boolean {
-    if (this.mode !== 'free' || this.ionActive || !(this.massResidual() < 1e-2)) return false;
+    if (this.mode !== 'free' || this.ionHeld || this.ionActive || !(this.massResidual() < 1e-6)) return false;
     this.ionActive = true;
     this.dim = this.m + this.p + 1;
     this.s = Math.sqrt(this.ionCalc);
     return true;
   }
 
+  /**
+   * Each balance is written, at the current point, either as ln(dissolved / (total - solids))
+   * (all dissolved terms positive: steps from far away are then nearly exact for a dominant
+   * complex) or linearly, scaled by the larger of the total and the sum of absolute terms.
+   */
   private chooseForms(): void {
     for (let k = 0; k < this.m; k++) {
-      const t = this.T[k] as number;
-      const calc = this.calc[k] as number;
-      this.logForm[k] = this.allPos[k] && t > 0 && calc > 0 ? 1 : 0;
-      this.rowDiv[k] = this.logForm[k] ? calc : Math.max(t, this.absSum[k] as number, 1e-300);
+      const log = !Number.isNaN(this.logMisfit(k));
+      this.logForm[k] = log ? 1 : 0;
+      this.rowDiv[k] = log ? (this.calc[k] as number) - (this.solidPart[k] as number) : Math.max(this.T[k] as number, this.absSum[k] as number, 1e-300);
     }
   }
 
@@ -363,14 +420,12 @@ export class Assemblage {
     const { m, p } = this;
     let merit = 0;
     for (let k = 0; k < m; k++) {
-      const t = this.T[k] as number;
-      const calc = this.calc[k] as number;
       let g: number;
       if (this.logForm[k]) {
-        if (!(calc > 0)) return Infinity;
-        g = Math.log(calc / t);
+        g = this.logMisfit(k);
+        if (Number.isNaN(g)) return Infinity;
       } else {
-        g = (calc - t) / (this.rowDiv[k] as number);
+        g = ((this.calc[k] as number) - (this.T[k] as number)) / (this.rowDiv[k] as number);
       }
       this.G[k] = g;
       merit += g * g;
@@ -391,9 +446,17 @@ export class Assemblage {
   private buildJacobian(): void {
     const { m, p, dim } = this;
     for (let k = 0; k < m; k++) {
-      const d = this.logForm[k] ? (this.calc[k] as number) : (this.rowDiv[k] as number);
       const row = k * dim;
-      for (let q = 0; q < dim; q++) this.J[row + q] = (this.dcalc[row + q] as number) / d;
+      if (this.logForm[k]) {
+        const dissolved = (this.calc[k] as number) - (this.solidPart[k] as number);
+        const rhs = (this.T[k] as number) - (this.solidPart[k] as number);
+        for (let q = 0; q < m; q++) this.J[row + q] = (this.dcalc[row + q] as number) / dissolved;
+        if (this.ionActive) this.J[row + dim - 1] = (this.dcalc[row + dim - 1] as number) / dissolved;
+        for (let r = 0; r < p; r++) this.J[row + m + r] = (this.bu[r * m + k] as number) / rhs;
+      } else {
+        const d = this.rowDiv[k] as number;
+        for (let q = 0; q < dim; q++) this.J[row + q] = (this.dcalc[row + q] as number) / d;
+      }
     }
     for (let r = 0; r < p; r++) {
       const row = (m + r) * dim;
@@ -416,7 +479,8 @@ export class Assemblage {
     for (let k = 0; k < this.m; k++) {
       const t = this.T[k] as number;
       const calc = this.calc[k] as number;
-      const d = this.allPos[k] && t > 0 ? (calc > 0 ? Math.abs(Math.log(calc / t)) : Infinity) : Math.abs(calc - t) / Math.max(t, this.absSum[k] as number, 1e-300);
+      const log = this.logMisfit(k, false);
+      const d = !Number.isNaN(log) ? Math.abs(log) : this.allPos[k] && t > 0 ? Infinity : Math.abs(calc - t) / Math.max(t, this.absSum[k] as number, 1e-300);
       if (!(d <= worst)) worst = d;
     }
     return worst;
@@ -435,8 +499,10 @@ export class Assemblage {
         const calc = this.calc[k] as number;
         const d = this.diag[k] as number;
         if (!(d > 0)) continue;
-        let delta = this.allPos[k] && t > 0 && calc > 0 ? -Math.log(calc / t) / (d / calc) : -(calc - t) / d;
-        const cap = this.allPos[k] ? 100 : 2.3;
+        const log = this.logMisfit(k, false);
+        const dissolved = calc - (this.solidPart[k] as number);
+        let delta = !Number.isNaN(log) ? -log / (d / dissolved) : -(calc - t) / d;
+        const cap = Number.isNaN(log) ? 2.3 : 100;
         delta = Math.max(-cap, Math.min(cap, delta));
         if (!Number.isFinite(delta)) continue;
         this.lnx[k] = (this.lnx[k] as number) + delta;
@@ -454,6 +520,9 @@ export class Assemblage {
     this.evaluate(true);
     let best = Infinity;
     let stalled = 0;
+    let uphill = 0;
+    // Round-off can stop progress just short of the tolerance; accept ten times it then.
+    const loose = 10 * tolerance;
     for (let it = 0; it <= maxIterations; it++) {
       if (this.maybeActivateIon()) this.evaluate(true);
       const res = this.massResidual();
@@ -465,7 +534,7 @@ export class Assemblage {
       if (score < best * 0.5) {
         best = score;
         stalled = 0;
-      } else if (++stalled >= 4 && res <= DEFAULTS.looseTolerance && ion <= DEFAULTS.looseTolerance && sat <= DEFAULTS.saturationTolerance * 100) {
+      } else if (++stalled >= 4 && res <= loose && ion <= loose && sat <= DEFAULTS.saturationTolerance * 100) {
         return { converged: true, singular: false, iterations: it, residual: res };
       }
       if (it === maxIterations) return { converged: false, singular: false, iterations: it, residual: res };
@@ -474,7 +543,10 @@ export class Assemblage {
       const merit = this.residualVector();
       this.buildJacobian();
       for (let q = 0; q < dim; q++) this.step[q] = -(this.G[q] as number);
-      if (!solveInPlace(this.J, this.step, dim)) return { converged: false, singular: true, iterations: it, residual: res };
+      if (!this.solidsIndependent) return { converged: false, singular: true, iterations: it, residual: res };
+      // Independent solids leave the system solvable however ill-conditioned (at an equivalence
+      // point free concentrations are ~1e-14 of the totals); only an exact breakdown counts.
+      if (!solveInPlace(this.J, this.step, dim, 1e-300)) return { converged: false, singular: true, iterations: it, residual: res };
       let biggest = 0;
       for (let k = 0; k < m; k++) biggest = Math.max(biggest, Math.abs(this.step[k] as number));
       if (!Number.isFinite(biggest)) return { converged: false, singular: true, iterations: it, residual: res };
@@ -482,18 +554,109 @@ export class Assemblage {
       for (let k = 0; k < m; k++) this.saveLnx[k] = this.lnx[k] as number;
       for (let r = 0; r < this.p; r++) this.saveN[r] = this.n[r] as number;
       const s0 = this.s;
-      for (let bt = 0; ; bt++) {
+      // Near the answer F changes by less than its round-off; the residual norm judges steps there.
+      const convex = this.linearOnly && this.p === 0 && !this.ionActive && res > 1e-6;
+      const f0 = convex ? this.potential() : 0;
+      let slope = 0;
+      if (convex) for (let k = 0; k < m; k++) slope += ((this.calc[k] as number) - (this.T[k] as number)) * (this.step[k] as number);
+      let accepted = false;
+      for (let bt = 0; bt <= (convex ? 40 : DEFAULTS.maxBacktracks); bt++) {
         for (let k = 0; k < m; k++) this.lnx[k] = (this.saveLnx[k] as number) + lambda * (this.step[k] as number);
         for (let r = 0; r < this.p; r++) this.n[r] = (this.saveN[r] as number) + lambda * (this.step[m + r] as number);
         if (this.ionActive) this.s = Math.max(0.5 * s0, s0 + lambda * (this.step[dim - 1] as number));
         this.evaluate(true);
-        const trial = this.residualVector();
-        if (trial < merit || bt >= DEFAULTS.maxBacktracks) break;
+        const better = convex ? this.potential() <= f0 + 1e-4 * lambda * slope : this.residualVector() < merit;
+        if (better) {
+          accepted = true;
+          break;
+        }
         lambda *= 0.5;
+      }
+      if (accepted) uphill = 0;
+      else if (!convex && ++uphill <= 3 && Number.isFinite(this.residualVector())) accepted = true;
+      if (!accepted) {
+        // No step along the Newton direction reduces the residual, a few times running: go back
+        // and let a fallback try. (A single uphill step is allowed: it often leaves a bad start.)
+        for (let k = 0; k < m; k++) this.lnx[k] = this.saveLnx[k] as number;
+        for (let r = 0; r < this.p; r++) this.n[r] = this.saveN[r] as number;
+        this.s = s0;
+        this.evaluate(false);
+        return { converged: false, singular: false, iterations: it + 1, residual: this.massResidual() };
       }
       this.trace?.push({ iteration: this.trace.length + 1, residual: res, step: lambda * biggest, solids: this.presentList().map((s) => this.tab.solidNames[s] as string) });
     }
     return { converged: false, singular: false, iterations: maxIterations, residual: Infinity };
+  }
+
+  /** True when the ionic strength is an unknown (Davies, not held by the problem). */
+  get ionFree(): boolean {
+    return this.mode === 'free';
+  }
+
+  /** Misfit of s^2 against the ionic strength of the concentrations at s, after solving at s. */
+  private ionMisfitAt(s: number, maxIterations: number, tolerance: number, count: { iterations: number }): number {
+    this.s = s;
+    let out = this.newton(maxIterations, tolerance);
+    count.iterations += out.iterations;
+    if (!out.converged) {
+      this.bracketSweeps(DEFAULTS.fallbackSweeps);
+      out = this.newton(maxIterations, tolerance);
+      count.iterations += out.iterations;
+    }
+    if (!out.converged) return NaN;
+    return (s * s - this.ionCalc) / Math.max(s * s, this.ionCalc, 1e-20);
+  }
+
+  /**
+   * Ionic-strength fallback for Davies at high ionic strength, where the coupled Newton can wander:
+   * hold s = sqrt(I), solve everything else, and bracket the root of s^2 - I(s) (negative at
+   * s = 0, positive for large s) with the Illinois method.
+   */
+  ionicStrengthFallback(maxIterations: number, tolerance: number): NewtonOutcome {
+    const count = { iterations: 0 };
+    const fail = (): NewtonOutcome => {
+      this.ionHeld = false;
+      return { converged: false, singular: false, iterations: count.iterations, residual: this.massResidual() };
+    };
+    this.ionHeld = true;
+    this.ionActive = false;
+    this.dim = this.m + this.p;
+    let lo = 0;
+    let flo = this.ionMisfitAt(0, maxIterations, tolerance, count);
+    if (!(flo <= 0)) return flo === 0 ? { ...fail(), converged: true } : fail();
+    let hi = Math.max(1.5 * Math.sqrt(this.ionCalc), 1e-3);
+    let fhi = this.ionMisfitAt(hi, maxIterations, tolerance, count);
+    for (let n = 0; fhi < 0 && n < 40; n++) {
+      lo = hi;
+      flo = fhi;
+      hi *= 2;
+      fhi = this.ionMisfitAt(hi, maxIterations, tolerance, count);
+    }
+    if (!(fhi >= 0)) return fail();
+    let side = 0;
+    let mid = hi;
+    let fm = fhi;
+    for (let i = 0; i < 100 && Math.abs(fm) > tolerance; i++) {
+      mid = (lo * fhi - hi * flo) / (fhi - flo);
+      if (!(mid > lo && mid < hi)) mid = 0.5 * (lo + hi);
+      fm = this.ionMisfitAt(mid, maxIterations, tolerance, count);
+      if (Number.isNaN(fm)) return fail();
+      if (fm > 0) {
+        hi = mid;
+        fhi = fm;
+        if (side === -1) flo /= 2;
+        side = -1;
+      } else {
+        lo = mid;
+        flo = fm;
+        if (side === 1) fhi /= 2;
+        side = 1;
+      }
+      if (hi - lo <= 1e-15 * hi) break;
+    }
+    this.ionHeld = false;
+    const converged = Math.abs(fm) <= DEFAULTS.looseTolerance && this.massResidual() <= DEFAULTS.looseTolerance;
+    return { converged, singular: false, iterations: count.iterations, residual: this.massResidual() };
   }
 
   /**
@@ -521,13 +684,19 @@ export class Assemblage {
     this.evaluate(false);
     const t = this.T[k] as number;
     const calc = this.calc[k] as number;
-    if (this.allPos[k] && t > 0) return calc > 0 ? Math.log(calc / t) : -Infinity;
+    if (this.allPos[k] && t > 0) {
+      const log = this.logMisfit(k, false);
+      if (!Number.isNaN(log)) return log;
+      // Solids claim the whole total (too much) or nothing is dissolved yet (too little).
+      return (this.T[k] as number) - (this.solidPart[k] as number) <= 0 ? 1 : -Infinity;
+    }
     return (calc - t) / Math.max(t, this.absSum[k] as number, 1e-300);
   }
 
   private solveOne(k: number): void {
     const floor = -3 * MAX_LN;
-    let a = this.lnx[k] as number;
+    const start = this.lnx[k] as number;
+    let a = start;
     let fa = this.balanceAt(k, a);
     if (fa === 0) return;
     let b = a;
@@ -540,7 +709,12 @@ export class Assemblage {
       fb = this.balanceAt(k, b);
       if (b === MAX_LN || b === floor) break;
     }
-    if (Math.sign(fb) === Math.sign(fa)) return;
+    if (Math.sign(fb) === Math.sign(fa)) {
+      // No sign change within reach (solids held at amounts the totals cannot supply): leave it.
+      this.lnx[k] = start;
+      this.evaluate(false);
+      return;
+    }
     let side = 0;
     for (let i = 0; i < 100 && Math.abs(b - a) > 1e-13 * Math.max(1, Math.abs(b)); i++) {
       let mid = (a * fb - b * fa) / (fb - fa);

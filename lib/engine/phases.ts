@@ -66,7 +66,13 @@ function coldStart(tab: Tableau): WarmStart {
     const t = tab.total[j] as number;
     lnx.push(Math.log(t > 0 ? t : 1e-7));
   }
-  return { lnx, n: new Array<number>(tab.nsol).fill(0), present: [], ionicStrength: 0 };
+  // First guess of I from the totals as free ions (complexes usually change it by a fraction).
+  let ionic = 0;
+  for (let j = 0; j < tab.nc; j++) {
+    const z = tab.componentCharge[j] as number;
+    ionic += 0.5 * z * z * (tab.fixed[j] ? Math.exp(tab.fixedLn[j] as number) : (tab.total[j] as number));
+  }
+  return { lnx, n: new Array<number>(tab.nsol).fill(0), present: [], ionicStrength: ionic };
 }
 
 class PhaseLoop {
@@ -84,18 +90,65 @@ class PhaseLoop {
     this.trace = wantTrace ? [] : null;
   }
 
-  attempt(present: number[]): { asm: Assemblage; out: NewtonOutcome } {
+  /** Loads the carried state into a freshly configured work space (solid amounts optional). */
+  private load(present: number[], withAmounts: boolean): Assemblage {
     const asm = assemblageFor(this.tab, this.absent, present);
     asm.trace = this.trace;
     for (let k = 0; k < asm.m; k++) {
       const v = this.cur.lnx[asm.u[k] as number] as number;
       asm.lnx[k] = Number.isFinite(v) ? v : Math.log(1e-7);
     }
-    present.forEach((s, r) => (asm.n[r] = this.cur.n[s] as number));
+    for (let r = 0; r < present.length; r++) asm.n[r] = withAmounts ? Math.max(0, this.cur.n[present[r] as number] as number) : 0;
+    if (withAmounts) this.scaleAmountsToFit(present, asm);
     asm.setIonicStrength(this.cur.ionicStrength);
+    return asm;
+  }
+
+  /**
+   * Amounts carried over from another set of solids can claim more of a component than its total
+   * (the set they came from had a negative amount elsewhere); scale them back so that each total
+   * keeps some part dissolved.
+   */
+  private scaleAmountsToFit(present: number[], asm: Assemblage): void {
+    const { tab } = this;
+    let factor = 1;
+    for (let j = 0; j < tab.nc; j++) {
+      if (tab.fixed[j]) continue;
+      let used = 0;
+      for (let r = 0; r < present.length; r++) used += Math.max(0, tab.b[(present[r] as number) * tab.nc + j] as number) * (asm.n[r] as number);
+      const t = tab.total[j] as number;
+      if (used > 0.99 * t) factor = Math.min(factor, (0.99 * t) / used);
+    }
+    if (factor < 1) for (let r = 0; r < present.length; r++) asm.n[r] = (asm.n[r] as number) * factor;
+  }
+
+  /**
+   * Solves one set of solids: Newton from the carried state; with solids, Newton again with the
+   * log form for their balances; under Davies, the ionic-strength fallback from the same start;
+   * then the bracketing sweeps from the start with no solid amounts, and Newton once more.
+   */
+  attempt(present: number[]): { asm: Assemblage; out: NewtonOutcome } {
+    let asm = this.load(present, true);
+    asm.linearOnly = present.length === 0;
     let out = asm.newton(this.maxIterations, this.tolerance);
     this.iterations += out.iterations;
-    if (!out.converged) {
+    // A singular Jacobian with solids present is the phase rule's business; without solids it is
+    // numerical (an underflowed column), and the fallbacks below may still succeed.
+    const retry = () => !out.converged && (!out.singular || present.length === 0) && this.iterations < DEFAULTS.iterationBudget;
+    if (retry() && present.length > 0) {
+      asm = this.load(present, true);
+      asm.solidLogForm = true;
+      out = asm.newton(this.maxIterations, this.tolerance);
+      this.iterations += out.iterations;
+    }
+    if (retry() && asm.ionFree) {
+      asm = this.load(present, true);
+      asm.solidLogForm = true;
+      out = asm.ionicStrengthFallback(this.maxIterations, this.tolerance);
+      this.iterations += out.iterations;
+    }
+    if (retry()) {
+      asm = this.load(present, false);
       asm.bracketSweeps(DEFAULTS.fallbackSweeps);
       out = asm.newton(this.maxIterations * 2, this.tolerance);
       this.iterations += out.iterations;
@@ -163,6 +216,7 @@ class PhaseLoop {
     for (let mask = 0; mask < 1 << list.length; mask++) subsets.push(list.filter((_, i) => mask & (1 << i)));
     subsets.sort((x, y) => x.length - y.length);
     for (const subset of subsets) {
+      if (this.iterations > DEFAULTS.iterationBudget) break;
       this.cur = start;
       const tried = this.attempt(subset);
       if (this.consistent(tried.asm, tried.out)) return tried;
@@ -170,6 +224,13 @@ class PhaseLoop {
     this.cur = start;
     return null;
   }
+}
+
+/** Solids worth trying in the subset search: all of them when few, else those involved so far. */
+function searchCandidates(tab: Tableau, possible: number[], involved: Set<number>): number[] {
+  const all: number[] = [];
+  for (let s = 0; s < tab.nsol; s++) if (possible[s]) all.push(s);
+  return all.length <= 10 ? all : [...involved];
 }
 
 function clampNegligible(asm: Assemblage): void {
@@ -200,7 +261,7 @@ export function settlePhases(tab: Tableau, opts: { tolerance: number; maxIterati
   for (let change = 0; change <= DEFAULTS.maxPhaseChanges; change++) {
     const key = [...present].sort((x, y) => x - y).join(',');
     if (visited.has(key)) {
-      const found = loop.search([...involved]);
+      const found = loop.search(searchCandidates(tab, possible, involved));
       if (found) return finish(found.asm, true);
       const last = loop.attempt(present);
       return finish(last.asm, false, 'The set of solids present did not settle (the phase-rule loop cycled and no consistent set was found).');
@@ -216,7 +277,6 @@ export function settlePhases(tab: Tableau, opts: { tolerance: number; maxIterati
         if (trial.out.converged) {
           ({ asm, out } = trial);
           present = present.filter((s) => s !== t);
-          visited.add([...present].sort((x, y) => x - y).join(','));
           swapped = true;
           break;
         }
@@ -229,7 +289,11 @@ export function settlePhases(tab: Tableau, opts: { tolerance: number; maxIterati
       }
     }
     if (!out.converged) {
-      return finish(asm, false, `Newton iteration did not converge (relative mass-balance residual ${out.residual.toExponential(2)} after ${loop.iterations} iterations).`);
+      // This set will not solve; another set of solids may (the answer may not need this one).
+      const residual = out.residual;
+      const found = present.length > 0 ? loop.search(searchCandidates(tab, possible, involved)) : null;
+      if (found) return finish(found.asm, true);
+      return finish(asm, false, `Newton iteration did not converge (relative mass-balance residual ${residual.toExponential(2)} after ${loop.iterations} iterations).`);
     }
     loop.save(asm);
     const neg = loop.mostNegative(asm);
