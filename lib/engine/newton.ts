@@ -17,6 +17,15 @@ import { rowsIndependent, solveInPlace } from './linear';
 import type { Tableau } from './tableau';
 
 const MAX_LN = 700;
+// Copied out of DEFAULTS: read in the hot loops, where a module binding beats a property chain.
+const SATURATION_TOLERANCE = DEFAULTS.saturationTolerance;
+const MAX_LN_STEP = DEFAULTS.maxLnStep;
+const MAX_BACKTRACKS = DEFAULTS.maxBacktracks;
+const FALLBACK_SWEEPS = DEFAULTS.fallbackSweeps;
+// NOTE: module-level copies of imported functions: under a CommonJS transform (tsx, jest) an
+// imported function is read through a getter at each call, and evaluate() runs thousands of times.
+const phiAt = daviesPhi;
+const phiSlopeAt = daviesPhiSlope;
 
 /** Outcome of one Newton attempt on one assemblage. */
 export interface NewtonOutcome {
@@ -48,7 +57,22 @@ export class Assemblage {
   readonly live: Int32Array;
   readonly speciesRow: Int32Array;
   readonly present: Int32Array;
-  private readonly au: Float64Array;
+  /** Nonzero coefficients of live row r over the unknowns: rowK/rowA[rowStart[r] .. rowStart[r + 1]). */
+  private readonly rowStart: Int32Array;
+  private readonly rowK: Int32Array;
+  private readonly rowA: Float64Array;
+  /** The same for present solid r over the unknowns (solStart, solK, solB). */
+  private readonly solStart: Int32Array;
+  private readonly solK: Int32Array;
+  private readonly solB: Float64Array;
+  /**
+   * The exponents behind x and c at the last evaluation: a sweep that moves one unknown leaves
+   * most of them unchanged, and an unchanged exponent reuses its exponential.
+   */
+  private readonly lastLnx: Float64Array;
+  private readonly lastL: Float64Array;
+  /** Whether dcalc and dIon belong to the last evaluation. */
+  private derivativesFresh = false;
   private readonly bu: Float64Array;
   private readonly allPos: Uint8Array;
   /** 1 where a present solid contains the unknown's component. */
@@ -117,7 +141,12 @@ export class Assemblage {
     this.live = new Int32Array(ns);
     this.speciesRow = new Int32Array(ns);
     this.present = new Int32Array(nsol);
-    this.au = new Float64Array(ns * nc);
+    this.rowStart = new Int32Array(ns + 1);
+    this.rowK = new Int32Array(ns * nc);
+    this.rowA = new Float64Array(ns * nc);
+    this.solStart = new Int32Array(nsol + 1);
+    this.solK = new Int32Array(nsol * nc);
+    this.solB = new Float64Array(nsol * nc);
     this.bu = new Float64Array(nsol * nc);
     this.allPos = new Uint8Array(nc);
     this.hasSolid = new Uint8Array(nc);
@@ -131,6 +160,8 @@ export class Assemblage {
     this.lnx = new Float64Array(nc);
     this.n = new Float64Array(nsol);
     this.c = new Float64Array(ns);
+    this.lastLnx = new Float64Array(nc);
+    this.lastL = new Float64Array(ns);
     this.x = new Float64Array(nc);
     this.calc = new Float64Array(nc);
     this.solidPart = new Float64Array(nc);
@@ -173,6 +204,7 @@ export class Assemblage {
     for (let j = 0; j < nc; j++) if (fixed[j]) fixedIon += 0.5 * (componentCharge[j] as number) ** 2 * Math.exp(fixedLn[j] as number);
     this.fixedIon = fixedIon;
     let nl = 0;
+    let nz = 0;
     for (let i = 0; i < ns; i++) {
       let dead = false;
       for (let j = 0; j < nc; j++) if (absent[j] && a[i * nc + j] !== 0) dead = true;
@@ -183,7 +215,7 @@ export class Assemblage {
       const z = speciesCharge[i] as number;
       let base = tab.lnK[i] as number;
       let q = -z * z;
-      for (let k = 0; k < m; k++) this.au[nl * m + k] = 0;
+      this.rowStart[nl] = nz;
       for (let j = 0; j < nc; j++) {
         const aij = a[i * nc + j] as number;
         if (aij === 0) continue;
@@ -191,7 +223,8 @@ export class Assemblage {
         if (fixed[j]) base += aij * (fixedLn[j] as number);
         const k = this.componentRow[j] as number;
         if (k >= 0) {
-          this.au[nl * m + k] = aij;
+          this.rowK[nz] = k;
+          this.rowA[nz++] = aij;
           if (aij < 0) this.allPos[k] = 0;
         }
       }
@@ -203,13 +236,16 @@ export class Assemblage {
       nl++;
     }
     this.nl = nl;
+    this.rowStart[nl] = nz;
     const p = present.length;
+    nz = 0;
     for (let r = 0; r < p; r++) {
       const sIdx = present[r] as number;
       this.present[r] = sIdx;
       let base = -(tab.lnKsp[sIdx] as number);
       let q = 0;
       for (let k = 0; k < m; k++) this.bu[r * m + k] = 0;
+      this.solStart[r] = nz;
       for (let j = 0; j < nc; j++) {
         const bj = b[sIdx * nc + j] as number;
         if (bj === 0) continue;
@@ -218,6 +254,8 @@ export class Assemblage {
         const k = this.componentRow[j] as number;
         if (k >= 0) {
           this.bu[r * m + k] = bj;
+          this.solK[nz] = k;
+          this.solB[nz++] = bj;
           this.hasSolid[k] = 1;
         }
       }
@@ -225,7 +263,11 @@ export class Assemblage {
       this.qB[r] = q;
       this.n[r] = 0;
     }
+    this.solStart[p] = nz;
     this.p = p;
+    this.derivativesFresh = false;
+    this.lastLnx.fill(NaN);
+    this.lastL.fill(NaN);
     this.solidsIndependent = p === 0 || rowsIndependent(this.bu, p, m, this.J);
     this.mode = tab.activity === 'ideal' ? 'ideal' : tab.fixedIonicStrength !== null ? 'held' : 'free';
     this.ionActive = false;
@@ -264,83 +306,108 @@ export class Assemblage {
     return this.phi * (this.tab.speciesCharge[i] as number) ** 2;
   }
 
-  /** Concentrations, calculated totals and (optionally) their derivatives at the current state. */
-  evaluate(withJacobian: boolean): void {
-    const { m, p, dim, au, bu, lnx } = this;
-    const ionCol = this.ionActive ? m + p : -1;
-    const davies = this.mode !== 'ideal';
-    this.phi = davies ? daviesPhi(this.s, this.tab.daviesA) : 0;
-    const dphi = ionCol >= 0 ? daviesPhiSlope(this.s, this.tab.daviesA) : 0;
+  /**
+   * Concentrations and calculated totals at the current state. Their derivatives are worked out
+   * from these when the Jacobian is next built, so that rejected trial steps skip them.
+   */
+  evaluate(): void {
+    const { m, p, lnx, x, c, calc, solidPart, absSum, diag, z2U, base0, qS, z2S, rowStart, rowK, rowA, solStart, solK, solB, lastLnx, lastL } = this;
+    const phi = this.mode !== 'ideal' ? phiAt(this.s, this.tab.daviesA) : 0;
+    this.phi = phi;
     let ion = this.fixedIon;
-    let dIonDs = 0;
-    if (withJacobian) {
-      const dc = this.dcalc;
-      for (let q = 0, end = m * dim; q < end; q++) dc[q] = 0;
-      for (let q = 0; q < dim; q++) this.dIon[q] = 0;
-    }
     for (let k = 0; k < m; k++) {
       const v = lnx[k] as number;
-      const xv = Math.exp(v > MAX_LN ? MAX_LN : v);
-      this.x[k] = xv;
-      this.calc[k] = xv;
-      this.solidPart[k] = 0;
-      this.absSum[k] = xv;
-      this.diag[k] = xv;
-      ion += 0.5 * (this.z2U[k] as number) * xv;
-      if (withJacobian) {
-        this.dcalc[k * dim + k] = xv;
-        this.dIon[k] = 0.5 * (this.z2U[k] as number) * xv;
+      let xv = x[k] as number;
+      if (v !== lastLnx[k]) {
+        xv = Math.exp(v > MAX_LN ? MAX_LN : v);
+        x[k] = xv;
+        lastLnx[k] = v;
       }
+      calc[k] = xv;
+      solidPart[k] = 0;
+      absSum[k] = xv;
+      diag[k] = xv;
+      ion += 0.5 * (z2U[k] as number) * xv;
     }
-    for (let r = 0; r < this.nl; r++) {
-      const off = r * m;
-      let l = (this.base0[r] as number) + this.phi * (this.qS[r] as number);
-      for (let k = 0; k < m; k++) {
-        const a = au[off + k] as number;
-        if (a !== 0) l += a * (lnx[k] as number);
+    for (let r = 0, nl = this.nl; r < nl; r++) {
+      const lo = rowStart[r] as number;
+      const hi = rowStart[r + 1] as number;
+      let l = (base0[r] as number) + phi * (qS[r] as number);
+      for (let e = lo; e < hi; e++) l += (rowA[e] as number) * (lnx[rowK[e] as number] as number);
+      let cr = c[r] as number;
+      if (l !== lastL[r]) {
+        cr = Math.exp(l > MAX_LN ? MAX_LN : l);
+        c[r] = cr;
+        lastL[r] = l;
       }
-      const c = Math.exp(l > MAX_LN ? MAX_LN : l);
-      this.c[r] = c;
-      if (c === 0) continue;
-      const zc = 0.5 * (this.z2S[r] as number) * c;
-      ion += zc;
-      const dLnCds = dphi * (this.qS[r] as number);
-      if (withJacobian && ionCol >= 0) dIonDs += zc * dLnCds;
-      for (let k = 0; k < m; k++) {
-        const a = au[off + k] as number;
-        if (a === 0) continue;
-        const ac = a * c;
-        this.calc[k] = (this.calc[k] as number) + ac;
-        this.absSum[k] = (this.absSum[k] as number) + Math.abs(ac);
-        this.diag[k] = (this.diag[k] as number) + ac * a;
-        if (withJacobian) {
-          const row = k * dim;
-          for (let q = 0; q < m; q++) {
-            const aq = au[off + q] as number;
-            if (aq !== 0) this.dcalc[row + q] = (this.dcalc[row + q] as number) + ac * aq;
-          }
-          if (ionCol >= 0) this.dcalc[row + ionCol] = (this.dcalc[row + ionCol] as number) + ac * dLnCds;
-          this.dIon[k] = (this.dIon[k] as number) + zc * a;
-        }
+      if (cr === 0) continue;
+      ion += 0.5 * (z2S[r] as number) * cr;
+      for (let e = lo; e < hi; e++) {
+        const k = rowK[e] as number;
+        const a = rowA[e] as number;
+        const ac = a * cr;
+        calc[k] = (calc[k] as number) + ac;
+        absSum[k] = (absSum[k] as number) + Math.abs(ac);
+        diag[k] = (diag[k] as number) + ac * a;
       }
     }
     for (let r = 0; r < p; r++) {
       const nr = this.n[r] as number;
-      let fs = (this.sbase0[r] as number) + this.phi * (this.qB[r] as number);
-      for (let k = 0; k < m; k++) {
-        const b = bu[r * m + k] as number;
-        if (b === 0) continue;
+      let fs = (this.sbase0[r] as number) + phi * (this.qB[r] as number);
+      for (let e = solStart[r] as number, hi = solStart[r + 1] as number; e < hi; e++) {
+        const k = solK[e] as number;
+        const b = solB[e] as number;
         fs += b * (lnx[k] as number);
-        this.calc[k] = (this.calc[k] as number) + b * nr;
-        this.solidPart[k] = (this.solidPart[k] as number) + b * nr;
-        this.absSum[k] = (this.absSum[k] as number) + Math.abs(b * nr);
-        if (withJacobian) this.dcalc[k * dim + m + r] = b;
+        calc[k] = (calc[k] as number) + b * nr;
+        solidPart[k] = (solidPart[k] as number) + b * nr;
+        absSum[k] = (absSum[k] as number) + Math.abs(b * nr);
       }
       this.f[r] = fs;
-      this.dF[r] = dphi * (this.qB[r] as number);
     }
     this.ionCalc = ion;
-    if (ionCol >= 0) this.dIon[ionCol] = dIonDs;
+    this.derivativesFresh = false;
+  }
+
+  /** Derivatives of the calculated totals, solid equations and ionic strength at the last evaluation. */
+  private derivatives(): void {
+    const { m, p, dim, x, c, dcalc, dIon, z2U, rowStart, rowK, rowA, solStart, solK, solB } = this;
+    const ionCol = this.ionActive ? m + p : -1;
+    const dphi = ionCol >= 0 ? phiSlopeAt(this.s, this.tab.daviesA) : 0;
+    let dIonDs = 0;
+    for (let q = 0, end = m * dim; q < end; q++) dcalc[q] = 0;
+    for (let q = 0; q < dim; q++) dIon[q] = 0;
+    for (let k = 0; k < m; k++) {
+      const xv = x[k] as number;
+      dcalc[k * dim + k] = xv;
+      dIon[k] = 0.5 * (z2U[k] as number) * xv;
+    }
+    for (let r = 0, nl = this.nl; r < nl; r++) {
+      const cr = c[r] as number;
+      if (cr === 0) continue;
+      const lo = rowStart[r] as number;
+      const hi = rowStart[r + 1] as number;
+      const zc = 0.5 * (this.z2S[r] as number) * cr;
+      const dLnCds = dphi * (this.qS[r] as number);
+      if (ionCol >= 0) dIonDs += zc * dLnCds;
+      for (let e = lo; e < hi; e++) {
+        const k = rowK[e] as number;
+        const a = rowA[e] as number;
+        const ac = a * cr;
+        const row = k * dim;
+        for (let g = lo; g < hi; g++) {
+          const q = row + (rowK[g] as number);
+          dcalc[q] = (dcalc[q] as number) + ac * (rowA[g] as number);
+        }
+        if (ionCol >= 0) dcalc[row + ionCol] = (dcalc[row + ionCol] as number) + ac * dLnCds;
+        dIon[k] = (dIon[k] as number) + zc * a;
+      }
+    }
+    for (let r = 0; r < p; r++) {
+      for (let e = solStart[r] as number, hi = solStart[r + 1] as number; e < hi; e++) dcalc[(solK[e] as number) * dim + m + r] = solB[e] as number;
+      this.dF[r] = dphi * (this.qB[r] as number);
+    }
+    if (ionCol >= 0) dIon[ionCol] = dIonDs;
+    this.derivativesFresh = true;
   }
 
   /**
@@ -444,6 +511,7 @@ export class Assemblage {
   }
 
   private buildJacobian(): void {
+    if (!this.derivativesFresh) this.derivatives();
     const { m, p, dim } = this;
     for (let k = 0; k < m; k++) {
       const row = k * dim;
@@ -494,6 +562,7 @@ export class Assemblage {
    */
   relax(maxSweeps: number, target: number): void {
     for (let sweep = 0; sweep < maxSweeps && this.distance() > target; sweep++) {
+      let moved = false;
       for (let k = 0; k < this.m; k++) {
         const t = this.T[k] as number;
         const calc = this.calc[k] as number;
@@ -505,36 +574,41 @@ export class Assemblage {
         const cap = Number.isNaN(log) ? 2.3 : 100;
         delta = Math.max(-cap, Math.min(cap, delta));
         if (!Number.isFinite(delta)) continue;
-        this.lnx[k] = (this.lnx[k] as number) + delta;
-        this.evaluate(false);
+        const next = (this.lnx[k] as number) + delta;
+        // An unchanged unknown leaves the evaluation as it is.
+        if (next === this.lnx[k]) continue;
+        this.lnx[k] = next;
+        this.evaluate();
+        moved = true;
       }
+      // A sweep that moved nothing is a fixed point: the sweeps left would repeat it.
+      if (!moved) break;
     }
   }
 
   /** Damped Newton from the current state. */
   newton(maxIterations: number, tolerance: number): NewtonOutcome {
     const { m } = this;
-    this.evaluate(false);
+    this.evaluate();
     if (this.distance() > 1) this.relax(40, 0.5);
-    this.maybeActivateIon();
-    this.evaluate(true);
+    if (this.maybeActivateIon()) this.evaluate();
     let best = Infinity;
     let stalled = 0;
     let uphill = 0;
     // Round-off can stop progress just short of the tolerance; accept ten times it then.
     const loose = 10 * tolerance;
     for (let it = 0; it <= maxIterations; it++) {
-      if (this.maybeActivateIon()) this.evaluate(true);
+      if (this.maybeActivateIon()) this.evaluate();
       const res = this.massResidual();
       const sat = this.saturationResidual();
       const ion = this.ionResidual();
-      const satOk = sat <= DEFAULTS.saturationTolerance;
+      const satOk = sat <= SATURATION_TOLERANCE;
       if (res <= tolerance && satOk && ion <= tolerance) return { converged: true, singular: false, iterations: it, residual: res };
       const score = Math.max(res, ion, sat * 1e-2);
       if (score < best * 0.5) {
         best = score;
         stalled = 0;
-      } else if (++stalled >= 4 && res <= loose && ion <= loose && sat <= DEFAULTS.saturationTolerance * 100) {
+      } else if (++stalled >= 4 && res <= loose && ion <= loose && sat <= SATURATION_TOLERANCE * 100) {
         return { converged: true, singular: false, iterations: it, residual: res };
       }
       if (it === maxIterations) return { converged: false, singular: false, iterations: it, residual: res };
@@ -550,7 +624,7 @@ export class Assemblage {
       let biggest = 0;
       for (let k = 0; k < m; k++) biggest = Math.max(biggest, Math.abs(this.step[k] as number));
       if (!Number.isFinite(biggest)) return { converged: false, singular: true, iterations: it, residual: res };
-      let lambda = biggest > DEFAULTS.maxLnStep ? DEFAULTS.maxLnStep / biggest : 1;
+      let lambda = biggest > MAX_LN_STEP ? MAX_LN_STEP / biggest : 1;
       for (let k = 0; k < m; k++) this.saveLnx[k] = this.lnx[k] as number;
       for (let r = 0; r < this.p; r++) this.saveN[r] = this.n[r] as number;
       const s0 = this.s;
@@ -560,11 +634,11 @@ export class Assemblage {
       let slope = 0;
       if (convex) for (let k = 0; k < m; k++) slope += ((this.calc[k] as number) - (this.T[k] as number)) * (this.step[k] as number);
       let accepted = false;
-      for (let bt = 0; bt <= (convex ? 40 : DEFAULTS.maxBacktracks); bt++) {
+      for (let bt = 0; bt <= (convex ? 40 : MAX_BACKTRACKS); bt++) {
         for (let k = 0; k < m; k++) this.lnx[k] = (this.saveLnx[k] as number) + lambda * (this.step[k] as number);
         for (let r = 0; r < this.p; r++) this.n[r] = (this.saveN[r] as number) + lambda * (this.step[m + r] as number);
         if (this.ionActive) this.s = Math.max(0.5 * s0, s0 + lambda * (this.step[dim - 1] as number));
-        this.evaluate(true);
+        this.evaluate();
         const better = convex ? this.potential() <= f0 + 1e-4 * lambda * slope : this.residualVector() < merit;
         if (better) {
           accepted = true;
@@ -580,7 +654,7 @@ export class Assemblage {
         for (let k = 0; k < m; k++) this.lnx[k] = this.saveLnx[k] as number;
         for (let r = 0; r < this.p; r++) this.n[r] = this.saveN[r] as number;
         this.s = s0;
-        this.evaluate(false);
+        this.evaluate();
         return { converged: false, singular: false, iterations: it + 1, residual: this.massResidual() };
       }
       this.trace?.push({ iteration: this.trace.length + 1, residual: res, step: lambda * biggest, solids: this.presentList().map((s) => this.tab.solidNames[s] as string) });
@@ -599,7 +673,7 @@ export class Assemblage {
     let out = this.newton(maxIterations, tolerance);
     count.iterations += out.iterations;
     if (!out.converged) {
-      this.bracketSweeps(DEFAULTS.fallbackSweeps);
+      this.bracketSweeps(FALLBACK_SWEEPS);
       out = this.newton(maxIterations, tolerance);
       count.iterations += out.iterations;
     }
@@ -681,7 +755,7 @@ export class Assemblage {
 
   private balanceAt(k: number, v: number): number {
     this.lnx[k] = v;
-    this.evaluate(false);
+    this.evaluate();
     const t = this.T[k] as number;
     const calc = this.calc[k] as number;
     if (this.allPos[k] && t > 0) {
@@ -712,7 +786,7 @@ export class Assemblage {
     if (Math.sign(fb) === Math.sign(fa)) {
       // No sign change within reach (solids held at amounts the totals cannot supply): leave it.
       this.lnx[k] = start;
-      this.evaluate(false);
+      this.evaluate();
       return;
     }
     let side = 0;
@@ -734,7 +808,7 @@ export class Assemblage {
       }
     }
     this.lnx[k] = Math.abs(fa) < Math.abs(fb) ? a : b;
-    this.evaluate(false);
+    this.evaluate();
   }
 }
 

@@ -5,7 +5,7 @@
 
 import { DEFAULTS } from './defaults';
 import { type Assemblage, assemblageFor, type NewtonOutcome, type TraceLine } from './newton';
-import type { Tableau } from './tableau';
+import { type Tableau, zeros } from './tableau';
 
 /** State carried from one solve to the next (curves start each point from the last). */
 export interface WarmStart {
@@ -30,10 +30,32 @@ export interface PhaseOutcome {
 
 const SUPERSATURATED = 1e-12;
 const NEGATIVE_AMOUNT = 1e-14;
+// Copied out of DEFAULTS: read once per attempt and per phase change.
+const ITERATION_BUDGET = DEFAULTS.iterationBudget;
+const FALLBACK_SWEEPS = DEFAULTS.fallbackSweeps;
+const MAX_PHASE_CHANGES = DEFAULTS.maxPhaseChanges;
+const NO_SOLIDS: ReadonlySet<number> = new Set();
+
+function ascending(x: number, y: number): number {
+  return x - y;
+}
+
+/** The list without one value (a new array). */
+function without(list: readonly number[], value: number): number[] {
+  const out: number[] = [];
+  for (const v of list) if (v !== value) out.push(v);
+  return out;
+}
+
+/** Whether solid s is among the assemblage's present solids. */
+function isPresent(asm: Assemblage, s: number): boolean {
+  for (let r = 0; r < asm.p; r++) if (asm.present[r] === s) return true;
+  return false;
+}
 
 /** Components that cannot exist: a zero total and no species that consumes them. */
 function findAbsent(tab: Tableau): number[] {
-  const absent = new Array<number>(tab.nc).fill(0);
+  const absent = zeros(tab.nc);
   for (let j = 0; j < tab.nc; j++) {
     if (tab.fixed[j] || tab.total[j] !== 0) continue;
     let consumes = false;
@@ -72,7 +94,7 @@ function coldStart(tab: Tableau): WarmStart {
     const z = tab.componentCharge[j] as number;
     ionic += 0.5 * z * z * (tab.fixed[j] ? Math.exp(tab.fixedLn[j] as number) : (tab.total[j] as number));
   }
-  return { lnx, n: new Array<number>(tab.nsol).fill(0), present: [], ionicStrength: ionic };
+  return { lnx, n: zeros(tab.nsol), present: [], ionicStrength: ionic };
 }
 
 class PhaseLoop {
@@ -134,32 +156,36 @@ class PhaseLoop {
     this.iterations += out.iterations;
     // A singular Jacobian with solids present is the phase rule's business; without solids it is
     // numerical (an underflowed column), and the fallbacks below may still succeed.
-    const retry = () => !out.converged && (!out.singular || present.length === 0) && this.iterations < DEFAULTS.iterationBudget;
-    if (retry() && present.length > 0) {
+    if (this.shouldRetry(out, present) && present.length > 0) {
       asm = this.load(present, true);
       asm.solidLogForm = true;
       out = asm.newton(this.maxIterations, this.tolerance);
       this.iterations += out.iterations;
     }
-    if (retry() && asm.ionFree) {
+    if (this.shouldRetry(out, present) && asm.ionFree) {
       asm = this.load(present, true);
       asm.solidLogForm = true;
       out = asm.ionicStrengthFallback(this.maxIterations, this.tolerance);
       this.iterations += out.iterations;
     }
-    if (retry()) {
+    if (this.shouldRetry(out, present)) {
       asm = this.load(present, false);
-      asm.bracketSweeps(DEFAULTS.fallbackSweeps);
+      asm.bracketSweeps(FALLBACK_SWEEPS);
       out = asm.newton(this.maxIterations * 2, this.tolerance);
       this.iterations += out.iterations;
     }
     return { asm, out };
   }
 
+  /** Whether a failed attempt is worth a fallback (and the iteration budget allows one). */
+  private shouldRetry(out: NewtonOutcome, present: number[]): boolean {
+    return !out.converged && (!out.singular || present.length === 0) && this.iterations < ITERATION_BUDGET;
+  }
+
   save(asm: Assemblage): void {
     const lnx = Array.from(this.cur.lnx);
     for (let k = 0; k < asm.m; k++) lnx[asm.u[k] as number] = asm.lnx[k] as number;
-    const n = new Array<number>(this.tab.nsol).fill(0);
+    const n = zeros(this.tab.nsol);
     for (let r = 0; r < asm.p; r++) n[asm.present[r] as number] = asm.n[r] as number;
     this.cur = { lnx, n, present: asm.presentList(), ionicStrength: asm.ionicStrength };
   }
@@ -189,12 +215,11 @@ class PhaseLoop {
   }
 
   /** The most supersaturated possible solid not in the set, excluding some, or -1. */
-  mostSupersaturated(asm: Assemblage, exclude: Set<number>): number {
+  mostSupersaturated(asm: Assemblage, exclude: ReadonlySet<number>): number {
     let best = -1;
     let bestSi = SUPERSATURATED;
-    const inSet = new Set(asm.presentList());
     for (let s = 0; s < this.tab.nsol; s++) {
-      if (!this.possible[s] || inSet.has(s) || exclude.has(s)) continue;
+      if (!this.possible[s] || exclude.has(s) || isPresent(asm, s)) continue;
       const si = saturationIndex(asm, s);
       if (si > bestSi) {
         best = s;
@@ -205,7 +230,7 @@ class PhaseLoop {
   }
 
   consistent(asm: Assemblage, out: NewtonOutcome): boolean {
-    return out.converged && this.mostNegative(asm) < 0 && this.mostSupersaturated(asm, new Set()) < 0;
+    return out.converged && this.mostNegative(asm) < 0 && this.mostSupersaturated(asm, NO_SOLIDS) < 0;
   }
 
   /** Tries subsets of the solids involved, smallest first; the first consistent one wins. */
@@ -216,7 +241,7 @@ class PhaseLoop {
     for (let mask = 0; mask < 1 << list.length; mask++) subsets.push(list.filter((_, i) => mask & (1 << i)));
     subsets.sort((x, y) => x.length - y.length);
     for (const subset of subsets) {
-      if (this.iterations > DEFAULTS.iterationBudget) break;
+      if (this.iterations > ITERATION_BUDGET) break;
       this.cur = start;
       const tried = this.attempt(subset);
       if (this.consistent(tried.asm, tried.out)) return tried;
@@ -237,53 +262,56 @@ function clampNegligible(asm: Assemblage): void {
   for (let r = 0; r < asm.p; r++) if ((asm.n[r] as number) < 0) asm.n[r] = 0;
 }
 
+/** The loop's outcome with this assemblage (amounts a hair below zero cleared if converged). */
+function finishWith(loop: PhaseLoop, asm: Assemblage, converged: boolean, message?: string): PhaseOutcome & { trace: TraceLine[] | null } {
+  if (converged) clampNegligible(asm);
+  loop.save(asm);
+  return { asm, converged, message, iterations: loop.iterations, absent: loop.absent, possible: loop.possible, state: loop.cur, trace: loop.trace };
+}
+
 /** Runs the phase-rule loop from a warm or cold start. */
 export function settlePhases(tab: Tableau, opts: { tolerance: number; maxIterations: number; trace: boolean }, warm?: WarmStart): PhaseOutcome & { trace: TraceLine[] | null } {
   const absent = findAbsent(tab);
-  const possible = new Array<number>(tab.nsol).fill(0);
+  const possible = zeros(tab.nsol);
   for (let s = 0; s < tab.nsol; s++) {
     possible[s] = 1;
     for (let j = 0; j < tab.nc; j++) if (absent[j] && tab.b[s * tab.nc + j] !== 0) possible[s] = 0;
   }
   const start = warm && warm.lnx.length === tab.nc ? warm : coldStart(tab);
   const loop = new PhaseLoop(tab, absent, possible, opts.tolerance, opts.maxIterations, start, opts.trace);
-  let present = start.present.filter((s) => s < tab.nsol && possible[s]);
+  let present: number[] = [];
+  for (const s of start.present) if (s < tab.nsol && possible[s]) present.push(s);
   const visited = new Set<string>();
   const involved = new Set<number>(present);
   const blocked = new Set<number>();
   let lastAdded = -1;
-  const finish = (asm: Assemblage, converged: boolean, message?: string) => {
-    if (converged) clampNegligible(asm);
-    loop.save(asm);
-    return { asm, converged, message, iterations: loop.iterations, absent, possible, state: loop.cur, trace: loop.trace };
-  };
 
-  for (let change = 0; change <= DEFAULTS.maxPhaseChanges; change++) {
-    const key = [...present].sort((x, y) => x - y).join(',');
+  for (let change = 0; change <= MAX_PHASE_CHANGES; change++) {
+    const key = present.slice().sort(ascending).join(',');
     if (visited.has(key)) {
       const found = loop.search(searchCandidates(tab, possible, involved));
-      if (found) return finish(found.asm, true);
+      if (found) return finishWith(loop, found.asm, true);
       const last = loop.attempt(present);
-      return finish(last.asm, false, 'The set of solids present did not settle (the phase-rule loop cycled and no consistent set was found).');
+      return finishWith(loop, last.asm, false, 'The set of solids present did not settle (the phase-rule loop cycled and no consistent set was found).');
     }
     visited.add(key);
     let { asm, out } = loop.attempt(present);
     if (!out.converged && out.singular && lastAdded >= 0) {
       // The added solid is not independent of those present: try it in place of each of them.
-      const others = present.filter((s) => s !== lastAdded);
+      const others = without(present, lastAdded);
       let swapped = false;
       for (const t of others) {
-        const trial = loop.attempt(present.filter((s) => s !== t));
+        const trial = loop.attempt(without(present, t));
         if (trial.out.converged) {
           ({ asm, out } = trial);
-          present = present.filter((s) => s !== t);
+          present = without(present, t);
           swapped = true;
           break;
         }
       }
       if (!swapped) {
         blocked.add(lastAdded);
-        present = present.filter((s) => s !== lastAdded);
+        present = without(present, lastAdded);
         lastAdded = -1;
         continue;
       }
@@ -292,13 +320,13 @@ export function settlePhases(tab: Tableau, opts: { tolerance: number; maxIterati
       // This set will not solve; another set of solids may (the answer may not need this one).
       const residual = out.residual;
       const found = present.length > 0 ? loop.search(searchCandidates(tab, possible, involved)) : null;
-      if (found) return finish(found.asm, true);
-      return finish(asm, false, `Newton iteration did not converge (relative mass-balance residual ${residual.toExponential(2)} after ${loop.iterations} iterations).`);
+      if (found) return finishWith(loop, found.asm, true);
+      return finishWith(loop, asm, false, `Newton iteration did not converge (relative mass-balance residual ${residual.toExponential(2)} after ${loop.iterations} iterations).`);
     }
     loop.save(asm);
     const neg = loop.mostNegative(asm);
     if (neg >= 0) {
-      present = present.filter((s) => s !== asm.present[neg]);
+      present = without(present, asm.present[neg] as number);
       lastAdded = -1;
       continue;
     }
@@ -309,11 +337,11 @@ export function settlePhases(tab: Tableau, opts: { tolerance: number; maxIterati
       lastAdded = add;
       continue;
     }
-    if (blocked.size > 0 && loop.mostSupersaturated(asm, new Set()) >= 0) {
-      return finish(asm, false, 'A supersaturated solid could not be added: its formula is not independent of the solids present (phase rule).');
+    if (blocked.size > 0 && loop.mostSupersaturated(asm, NO_SOLIDS) >= 0) {
+      return finishWith(loop, asm, false, 'A supersaturated solid could not be added: its formula is not independent of the solids present (phase rule).');
     }
-    return finish(asm, true);
+    return finishWith(loop, asm, true);
   }
   const last = loop.attempt(present);
-  return finish(last.asm, false, 'The set of solids present did not settle within the allowed number of changes.');
+  return finishWith(loop, last.asm, false, 'The set of solids present did not settle within the allowed number of changes.');
 }

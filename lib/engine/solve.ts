@@ -8,6 +8,10 @@ import { saturationIndex, settlePhases, type WarmStart } from './phases';
 import { compileProblem, type Tableau } from './tableau';
 import type { Problem, SolveResult } from './types';
 
+// Copied out of DEFAULTS: read on every solve.
+const DAVIES_LIMIT_I = DEFAULTS.daviesLimitI;
+const NEAR_SATURATION = DEFAULTS.nearSaturation;
+
 /** A result together with the state to start the next, nearby solve from. */
 export interface TableauSolution {
   result: SolveResult & { trace?: TraceLine[] };
@@ -22,28 +26,30 @@ function buildResult(tab: Tableau, asm: Assemblage, possible: number[]): Omit<So
   const free: Record<string, number> = {};
   const species: Record<string, number> = {};
   const gamma: Record<string, number> = {};
-  tab.components.forEach((name, j) => {
+  for (let j = 0; j < tab.nc; j++) {
+    const name = tab.components[j] as string;
     const k = asm.componentRow[j] as number;
-    const value = k >= 0 ? (asm.x[k] as number) : tab.fixed[j] ? Math.exp(tab.fixedLn[j] as number) : 0;
+    const value = k >= 0 ? (asm.x[k] as number) : tab.fixed[j] ? (tab.fixedValue[j] as number) : 0;
     free[name] = finiteOr(value, 0);
     species[name] = free[name];
     gamma[name] = finiteOr(Math.exp(asm.lnGammaComponent(j)), 1);
-  });
-  tab.speciesNames.forEach((name, i) => {
+  }
+  for (let i = 0; i < tab.ns; i++) {
+    const name = tab.speciesNames[i] as string;
     const r = asm.speciesRow[i] as number;
     species[name] = r >= 0 ? finiteOr(asm.c[r] as number, 0) : 0;
     gamma[name] = finiteOr(Math.exp(asm.lnGammaSpecies(i)), 1);
-  });
+  }
   const solids: Record<string, number> = {};
   for (let r = 0; r < asm.p; r++) {
     const amount = asm.n[r] as number;
     if (amount > 0 && Number.isFinite(amount)) solids[tab.solidNames[asm.present[r] as number] as string] = amount;
   }
   const saturation: Record<string, number> = {};
-  tab.solidNames.forEach((name, s) => {
+  for (let s = 0; s < tab.nsol; s++) {
     const si = possible[s] ? saturationIndex(asm, s) : -Infinity;
-    saturation[name] = Number.isNaN(si) ? -Infinity : si;
-  });
+    saturation[tab.solidNames[s] as string] = Number.isNaN(si) ? -Infinity : si;
+  }
   return {
     free,
     species,
@@ -59,14 +65,14 @@ function buildResult(tab: Tableau, asm: Assemblage, possible: number[]): Omit<So
 
 function resultWarnings(tab: Tableau, body: ReturnType<typeof buildResult>): string[] {
   const warnings = [...tab.warnings];
-  if (tab.activity === 'davies' && body.ionicStrength > DEFAULTS.daviesLimitI) {
+  if (tab.activity === 'davies' && body.ionicStrength > DAVIES_LIMIT_I) {
     warnings.push(
-      `Ionic strength ${body.ionicStrength.toPrecision(3)} mol/L is above ${DEFAULTS.daviesLimitI} mol/L, beyond the usual range of the Davies equation; treat activities as estimates.`,
+      `Ionic strength ${body.ionicStrength.toPrecision(3)} mol/L is above ${DAVIES_LIMIT_I} mol/L, beyond the usual range of the Davies equation; treat activities as estimates.`,
     );
   }
   for (const name of tab.solidNames) {
     const si = body.saturation[name] as number;
-    if (body.solids[name] === undefined && si < 0 && si > -DEFAULTS.nearSaturation) {
+    if (body.solids[name] === undefined && si < 0 && si > -NEAR_SATURATION) {
       warnings.push(`${name} is close to saturation (saturation index ${si.toFixed(2)}): a small change may precipitate it.`);
     }
   }

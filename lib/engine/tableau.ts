@@ -8,6 +8,8 @@ import { EngineInputError } from './errors';
 import { daviesA, vantHoff } from './temperature';
 import type { ActivityModel, Problem, SolidInput, SpeciesInput } from './types';
 
+const REFERENCE_TEMPERATURE_C = DEFAULTS.referenceTemperatureC;
+
 /** The compiled problem. Arrays are row-major: a[i * nc + j] is species i's count of component j. */
 export interface Tableau {
   nc: number;
@@ -17,6 +19,8 @@ export interface Tableau {
   fixed: number[];
   /** Analytical total, mol/L (0 for fixed components). */
   total: number[];
+  /** Fixed free concentration as given, mol/L (0 for components with totals). */
+  fixedValue: number[];
   /** ln of the fixed free concentration (0 for components with totals). */
   fixedLn: number[];
   ns: number;
@@ -39,6 +43,13 @@ export interface Tableau {
 }
 
 type Obj = Record<string, unknown>;
+
+/** A packed array of n zeros (quicker to build and read than new Array(n).fill(0), which starts holey). */
+export function zeros(n: number): number[] {
+  const out: number[] = [];
+  for (let i = 0; i < n; i++) out.push(0);
+  return out;
+}
 
 function isObject(value: unknown): value is Obj {
   return typeof value === 'object' && value !== null && !Array.isArray(value);
@@ -91,7 +102,7 @@ function readAmounts(problem: Obj, key: 'totals' | 'fixed', index: Map<string, n
       if (key === 'totals') throw new EngineInputError(field, `a total cannot be negative (got ${v} mol/L)`);
       throw new EngineInputError(field, `a fixed free concentration must be above 0 mol/L (got ${v})`);
     }
-    into[j] = key === 'totals' ? v : Math.log(v);
+    into[j] = v;
     seen[j] = 1;
   }
 }
@@ -110,41 +121,49 @@ interface ReadContext {
   stale: string[];
 }
 
-function readStoich(raw: unknown, where: () => string, ctx: ReadContext): number[] {
-  if (!isObject(raw)) throw new EngineInputError(`${where()}.stoich`, 'must be an object of component name to count');
-  const row = new Array<number>(ctx.nc).fill(0);
+/** The field path of entry i of a list, e.g. "species[2]"; built only when an error needs it. */
+function entryPath(list: 'species' | 'solids', i: number): string {
+  return `${list}[${i}]`;
+}
+
+/** finite() for a field of entry i of a list; the field path is built only on failure. */
+function finiteAt(value: unknown, list: 'species' | 'solids', i: number, field: string, what: string): number {
+  return typeof value === 'number' && Number.isFinite(value) ? value : finite(value, `${entryPath(list, i)}.${field}`, what);
+}
+
+function readStoich(raw: unknown, list: 'species' | 'solids', i: number, ctx: ReadContext): number[] {
+  if (!isObject(raw)) throw new EngineInputError(`${entryPath(list, i)}.stoich`, 'must be an object of component name to count');
+  const row = zeros(ctx.nc);
   let any = false;
   for (const name in raw) {
     const j = ctx.index.get(name);
     if (j === undefined) {
-      throw new EngineInputError(`${where()}.stoich.${name}`, `unknown component "${name}"; add it to components or fix the name`);
+      throw new EngineInputError(`${entryPath(list, i)}.stoich.${name}`, `unknown component "${name}"; add it to components or fix the name`);
     }
     const value = raw[name];
-    row[j] = typeof value === 'number' && Number.isFinite(value) ? value : finite(value, `${where()}.stoich.${name}`, 'a stoichiometric coefficient');
+    row[j] = typeof value === 'number' && Number.isFinite(value) ? value : finite(value, `${entryPath(list, i)}.stoich.${name}`, 'a stoichiometric coefficient');
     if (row[j] !== 0) any = true;
   }
-  if (!any) throw new EngineInputError(`${where()}.stoich`, 'needs at least one component with a non-zero coefficient');
+  if (!any) throw new EngineInputError(`${entryPath(list, i)}.stoich`, 'needs at least one component with a non-zero coefficient');
   return row;
 }
 
 function readReaction(raw: unknown, list: 'species' | 'solids', i: number, ctx: ReadContext): Reaction {
-  const where = () => `${list}[${i}]`;
   const key = list === 'solids' ? 'logKsp' : 'logK';
-  if (!isObject(raw)) throw new EngineInputError(where(), `must be an object with name, ${key} and stoich`);
+  if (!isObject(raw)) throw new EngineInputError(entryPath(list, i), `must be an object with name, ${key} and stoich`);
   const { name } = raw;
-  if (typeof name !== 'string' || name.trim() === '') throw new EngineInputError(`${where()}.name`, 'must be a non-empty string');
-  const rawK = raw[key];
-  let logK = typeof rawK === 'number' && Number.isFinite(rawK) ? rawK : finite(rawK, `${where()}.${key}`, list === 'solids' ? 'log Ksp' : 'log K');
-  const row = readStoich(raw.stoich, where, ctx);
-  const refC = raw.temperatureC === undefined ? DEFAULTS.referenceTemperatureC : finite(raw.temperatureC, `${where()}.temperatureC`, 'a temperature');
+  if (typeof name !== 'string' || name.trim() === '') throw new EngineInputError(`${entryPath(list, i)}.name`, 'must be a non-empty string');
+  let logK = finiteAt(raw[key], list, i, key, list === 'solids' ? 'log Ksp' : 'log K');
+  const row = readStoich(raw.stoich, list, i, ctx);
+  const refC = raw.temperatureC === undefined ? REFERENCE_TEMPERATURE_C : finiteAt(raw.temperatureC, list, i, 'temperatureC', 'a temperature');
   if (raw.deltaH !== undefined) {
-    const dh = finite(raw.deltaH, `${where()}.deltaH`, 'an enthalpy in kJ/mol');
+    const dh = finiteAt(raw.deltaH, list, i, 'deltaH', 'an enthalpy in kJ/mol');
     logK = vantHoff(logK, dh, refC, ctx.temperatureC);
   } else if (Math.abs(refC - ctx.temperatureC) > 0.5) {
     ctx.stale.push(name);
   }
   let charge = chargeFromName(name);
-  if (list === 'species' && raw.charge !== undefined) charge = finite(raw.charge, `${where()}.charge`, 'a charge');
+  if (list === 'species' && raw.charge !== undefined) charge = finiteAt(raw.charge, list, i, 'charge', 'a charge');
   return { name, logK, row, charge };
 }
 
@@ -183,17 +202,25 @@ function occursBefore(names: readonly Reaction[], name: string, upto: number): b
   return false;
 }
 
+/** Whether a row has a non-zero coefficient on a component that is not fixed. */
+function hasFreeComponent(row: readonly number[], fixed: readonly number[]): boolean {
+  for (let j = 0; j < row.length; j++) if (row[j] !== 0 && !fixed[j]) return true;
+  return false;
+}
+
 /** Checks a problem and compiles it; throws EngineInputError naming the field at fault. */
 export function compileProblem(input: Problem | unknown): Tableau {
   if (!isObject(input)) throw new EngineInputError('problem', 'must be a JSON object with components, totals, species and solids');
   const { components, index } = readComponents(input);
   const nc = components.length;
-  const total = new Array<number>(nc).fill(0);
-  const fixedLn = new Array<number>(nc).fill(0);
-  const hasTotal = new Array<number>(nc).fill(0);
-  const fixed = new Array<number>(nc).fill(0);
+  const total = zeros(nc);
+  const fixedValue = zeros(nc);
+  const fixedLn = zeros(nc);
+  const hasTotal = zeros(nc);
+  const fixed = zeros(nc);
   readAmounts(input, 'totals', index, total, hasTotal);
-  readAmounts(input, 'fixed', index, fixedLn, fixed);
+  readAmounts(input, 'fixed', index, fixedValue, fixed);
+  for (let j = 0; j < nc; j++) if (fixed[j]) fixedLn[j] = Math.log(fixedValue[j] as number);
   for (let j = 0; j < nc; j++) {
     const name = components[j] as string;
     if (hasTotal[j] && fixed[j]) throw new EngineInputError(`fixed.${name}`, `"${name}" has both a total and a fixed free concentration; give one`);
@@ -217,7 +244,7 @@ export function compileProblem(input: Problem | unknown): Tableau {
   for (let i = 0; i < rawSolids.length; i++) {
     const r = readReaction(rawSolids[i], 'solids', i, ctx);
     if (occursBefore(solids, r.name, i)) throw new EngineInputError(`solids[${i}].name`, `duplicate solid "${r.name}"`);
-    if (!r.row.some((v, j) => v !== 0 && !fixed[j])) {
+    if (!hasFreeComponent(r.row, fixed)) {
       throw new EngineInputError(`solids[${i}].stoich`, `"${r.name}" is made only of fixed components; at least one of its components needs a total`);
     }
     solids.push(r);
@@ -263,6 +290,7 @@ export function compileProblem(input: Problem | unknown): Tableau {
     componentCharge,
     fixed,
     total,
+    fixedValue,
     fixedLn,
     ns,
     speciesNames: speciesNamesList,
@@ -285,6 +313,7 @@ export function compileProblem(input: Problem | unknown): Tableau {
 export function retarget(tab: Tableau, change: { totals?: Record<string, number>; fixed?: Record<string, number> }): Tableau {
   const total = Array.from(tab.total);
   const fixedLn = Array.from(tab.fixedLn);
+  const fixedValue = Array.from(tab.fixedValue);
   for (const [name, v] of Object.entries(change.totals ?? {})) {
     const j = tab.components.indexOf(name);
     if (j < 0 || tab.fixed[j]) throw new EngineInputError(`totals.${name}`, `"${name}" is not a component with a total`);
@@ -296,8 +325,9 @@ export function retarget(tab: Tableau, change: { totals?: Record<string, number>
     if (j < 0 || !tab.fixed[j]) throw new EngineInputError(`fixed.${name}`, `"${name}" is not a fixed component`);
     if (!Number.isFinite(v) || v <= 0) throw new EngineInputError(`fixed.${name}`, `a fixed free concentration must be above 0 mol/L, got ${v}`);
     fixedLn[j] = Math.log(v);
+    fixedValue[j] = v;
   }
-  return { ...tab, total, fixedLn };
+  return { ...tab, total, fixedValue, fixedLn };
 }
 
 export type { SpeciesInput, SolidInput };

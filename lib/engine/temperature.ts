@@ -23,6 +23,10 @@ function waterPermittivity(t: number): number {
 /** Davies A, (L/mol)^0.5, at temperatureC: the 25 C value scaled by (eps T)^-3/2 (density held at 1). */
 export function daviesA(a25: number, temperatureC: number): number {
   if (Math.abs(temperatureC - 25) < 1e-9) return a25;
-  const at = (t: number) => Math.pow(waterPermittivity(t) * (t + KELVIN), -1.5);
-  return (a25 * at(temperatureC)) / at(25);
+  return (a25 * permittivityFactor(temperatureC)) / permittivityFactor(25);
+}
+
+/** (eps T)^-3/2 at t, degrees Celsius. */
+function permittivityFactor(t: number): number {
+  return Math.pow(waterPermittivity(t) * (t + KELVIN), -1.5);
 }
