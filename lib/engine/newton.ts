@@ -13,6 +13,7 @@
 
 import { daviesPhi, daviesPhiSlope } from './activity';
 import { DEFAULTS } from './defaults';
+import { illinois } from './illinois';
 import { rowsIndependent, solveInPlace } from './linear';
 import type { Tableau } from './tableau';
 
@@ -707,27 +708,13 @@ export class Assemblage {
       fhi = this.ionMisfitAt(hi, maxIterations, tolerance, count);
     }
     if (!(fhi >= 0)) return fail();
-    let side = 0;
-    let mid = hi;
-    let fm = fhi;
-    for (let i = 0; i < 100 && Math.abs(fm) > tolerance; i++) {
-      mid = (lo * fhi - hi * flo) / (fhi - flo);
-      if (!(mid > lo && mid < hi)) mid = 0.5 * (lo + hi);
-      fm = this.ionMisfitAt(mid, maxIterations, tolerance, count);
-      if (Number.isNaN(fm)) return fail();
-      if (fm > 0) {
-        hi = mid;
-        fhi = fm;
-        if (side === -1) flo /= 2;
-        side = -1;
-      } else {
-        lo = mid;
-        flo = fm;
-        if (side === 1) fhi /= 2;
-        side = 1;
-      }
-      if (hi - lo <= 1e-15 * hi) break;
-    }
+    const found = illinois(
+      (v) => this.ionMisfitAt(v, maxIterations, tolerance, count),
+      { a: lo, fa: flo, b: hi, fb: fhi },
+      (_v, fv, a, b) => Math.abs(fv) <= tolerance || Math.abs(b - a) <= 1e-15 * Math.max(Math.abs(a), Math.abs(b)),
+    );
+    if (Number.isNaN(found.fx)) return fail();
+    const fm = found.fx;
     this.ionHeld = false;
     const converged = Math.abs(fm) <= DEFAULTS.looseTolerance && this.massResidual() <= DEFAULTS.looseTolerance;
     return { converged, singular: false, iterations: count.iterations, residual: this.massResidual() };
@@ -789,24 +776,14 @@ export class Assemblage {
       this.evaluate();
       return;
     }
-    let side = 0;
-    for (let i = 0; i < 100 && Math.abs(b - a) > 1e-13 * Math.max(1, Math.abs(b)); i++) {
-      let mid = (a * fb - b * fa) / (fb - fa);
-      if (!Number.isFinite(mid) || mid <= Math.min(a, b) || mid >= Math.max(a, b)) mid = 0.5 * (a + b);
-      const fm = this.balanceAt(k, mid);
-      if (fm === 0) return;
-      if (Math.sign(fm) === Math.sign(fb)) {
-        b = mid;
-        fb = fm;
-        if (side === -1) fa /= 2;
-        side = -1;
-      } else {
-        a = mid;
-        fa = fm;
-        if (side === 1) fb /= 2;
-        side = 1;
-      }
-    }
+    const found = illinois(
+      (v) => this.balanceAt(k, v),
+      { a, fa, b, fb },
+      (_v, fv, lo, hi) => fv === 0 || Math.abs(hi - lo) <= 1e-13 * Math.max(1, Math.abs(hi)),
+    );
+    // balanceAt left the state at the point tried last; a root hit exactly is kept as it is.
+    if (found.fx === 0) return;
+    ({ a, fa, b, fb } = found);
     this.lnx[k] = Math.abs(fa) < Math.abs(fb) ? a : b;
     this.evaluate();
   }
