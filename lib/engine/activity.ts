@@ -12,8 +12,3 @@ export function daviesPhi(s: number, a: number): number {
 export function daviesPhiSlope(s: number, a: number): number {
   return -a * Math.LN10 * (1 / ((1 + s) * (1 + s)) - 0.6 * s);
 }
-
-/** ln gamma for charge z at ionic strength I (mol/L) under Davies with the given A. */
-export function daviesLnGamma(z: number, ionicStrength: number, a: number): number {
-  return z === 0 ? 0 : z * z * daviesPhi(Math.sqrt(ionicStrength), a);
-}

@@ -202,7 +202,7 @@ export class Assemblage {
     }
     this.m = m;
     let fixedIon = 0;
-    for (let j = 0; j < nc; j++) if (fixed[j]) fixedIon += 0.5 * (componentCharge[j] as number) ** 2 * Math.exp(fixedLn[j] as number);
+    for (let j = 0; j < nc; j++) if (fixed[j]) fixedIon += 0.5 * (componentCharge[j] as number) ** 2 * (tab.fixedValue[j] as number);
     this.fixedIon = fixedIon;
     let nl = 0;
     let nz = 0;

@@ -23,9 +23,9 @@ export interface PhaseOutcome {
   converged: boolean;
   message?: string;
   iterations: number;
-  absent: number[];
   possible: number[];
   state: WarmStart;
+  trace: TraceLine[] | null;
 }
 
 const SUPERSATURATED = 1e-12;
@@ -92,7 +92,7 @@ function coldStart(tab: Tableau): WarmStart {
   let ionic = 0;
   for (let j = 0; j < tab.nc; j++) {
     const z = tab.componentCharge[j] as number;
-    ionic += 0.5 * z * z * (tab.fixed[j] ? Math.exp(tab.fixedLn[j] as number) : (tab.total[j] as number));
+    ionic += 0.5 * z * z * (tab.fixed[j] ? (tab.fixedValue[j] as number) : (tab.total[j] as number));
   }
   return { lnx, n: zeros(tab.nsol), present: [], ionicStrength: ionic };
 }
@@ -263,14 +263,14 @@ function clampNegligible(asm: Assemblage): void {
 }
 
 /** The loop's outcome with this assemblage (amounts a hair below zero cleared if converged). */
-function finishWith(loop: PhaseLoop, asm: Assemblage, converged: boolean, message?: string): PhaseOutcome & { trace: TraceLine[] | null } {
+function finishWith(loop: PhaseLoop, asm: Assemblage, converged: boolean, message?: string): PhaseOutcome {
   if (converged) clampNegligible(asm);
   loop.save(asm);
-  return { asm, converged, message, iterations: loop.iterations, absent: loop.absent, possible: loop.possible, state: loop.cur, trace: loop.trace };
+  return { asm, converged, message, iterations: loop.iterations, possible: loop.possible, state: loop.cur, trace: loop.trace };
 }
 
 /** Runs the phase-rule loop from a warm or cold start. */
-export function settlePhases(tab: Tableau, opts: { tolerance: number; maxIterations: number; trace: boolean }, warm?: WarmStart): PhaseOutcome & { trace: TraceLine[] | null } {
+export function settlePhases(tab: Tableau, opts: { tolerance: number; maxIterations: number; trace: boolean }, warm?: WarmStart): PhaseOutcome {
   const absent = findAbsent(tab);
   const possible = zeros(tab.nsol);
   for (let s = 0; s < tab.nsol; s++) {

@@ -6,7 +6,7 @@ import { chargeFromName } from './charge';
 import { DEFAULTS } from './defaults';
 import { EngineInputError } from './errors';
 import { daviesA, vantHoff } from './temperature';
-import type { ActivityModel, Problem, SolidInput, SpeciesInput } from './types';
+import type { ActivityModel, Problem } from './types';
 
 const REFERENCE_TEMPERATURE_C = DEFAULTS.referenceTemperatureC;
 
@@ -330,4 +330,3 @@ export function retarget(tab: Tableau, change: { totals?: Record<string, number>
   return { ...tab, total, fixedValue, fixedLn };
 }
 
-export type { SpeciesInput, SolidInput };
