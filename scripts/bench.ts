@@ -28,7 +28,7 @@ import { parseArgs } from 'node:util';
 import { DEMO_BATHS } from '@/lib/chemistry/demo-baths';
 
 import { builtInCases, EngineBugError, folderCases, type BenchCase } from './lib/bench-cases';
-import { collect, type CaseTiming, type CurveSpec, type CurveTiming, median, PLANS, quantile, timeCases, timeCurve } from './lib/bench-timing';
+import { collect, type CaseTiming, type CurveSpec, type CurveTiming, type Figures, median, PLANS, quantile, timeCases, timeCurve } from './lib/bench-timing';
 import { InputError } from './lib/json-text';
 
 const USAGE = `Usage: npm run bench [-- [--json] [--quick] [DIR]]
@@ -84,14 +84,8 @@ function curveSpec(): CurveSpec {
   return { problem: bath.problem, component: CURVE.component, from: CURVE.from, to: CURVE.to, points: CURVE.points };
 }
 
-interface Summary {
+interface Summary extends Figures {
   cases: number;
-  medianUs: number;
-  p99Us: number;
-  maxUs: number;
-  wallMedianUs: number;
-  wallP99Us: number;
-  wallMaxUs: number;
   solvesPerSecond: number;
   /** Pooled median of the cases with 4 to 6 components (the median target), or NaN if none. */
   targetMedianUs: number;

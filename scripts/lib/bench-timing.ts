@@ -45,13 +45,8 @@ export const PLANS: Record<'full' | 'quick', BenchPlan> = {
   quick: { warmup: 10, rounds: 2, collect: false, perRound: 10, caseBudgetMs: 400, curveWarmup: 0, curveReps: 1 },
 };
 
-/** What one case measured, us per solve. */
-export interface CaseTiming {
-  /** Busy time of every timed solve, sorted. */
-  times: Float64Array;
-  /** Wall-clock time of every timed solve, sorted. */
-  wall: Float64Array;
-  iterations: number;
+/** Busy and wall-clock figures, us per solve: of one case, or pooled over all of them. */
+export interface Figures {
   medianUs: number;
   p99Us: number;
   maxUs: number;
@@ -59,6 +54,15 @@ export interface CaseTiming {
   wallMedianUs: number;
   wallP99Us: number;
   wallMaxUs: number;
+}
+
+/** What one case measured, us per solve. */
+export interface CaseTiming extends Figures {
+  /** Busy time of every timed solve, sorted. */
+  times: Float64Array;
+  /** Wall-clock time of every timed solve, sorted. */
+  wall: Float64Array;
+  iterations: number;
   converged: boolean;
   message?: string;
   newtonIterations: number;
