@@ -9,6 +9,7 @@ export type PrepareResult = { created: boolean; name: string; seed: SeedResult }
 /** One line per thing preparing did, for the console of npm start and npm run db:prepare. */
 export function describePrepare({ created, name, seed }: PrepareResult): string {
   const made = created ? `Created database ${name}.\n` : '';
+  if (seed.production) return `${made}NODE_ENV=production: demo data and demo accounts are never seeded.\n`;
   return made + (seed.applied ? `Seeded demo data (v${seed.version}).\n` : 'Demo data already present.\n');
 }
 

@@ -4,6 +4,8 @@ import { createDb } from '@/db/client';
 import { runMigrations } from '@/db/migrate';
 import { describePrepare, prepareDemoDatabase } from '@/db/prepare';
 import { createApp } from '@/server/app';
+import { startFakeSmtp, type FakeSmtp } from '@/server/mail/fake-smtp';
+import { createMailer, type Mailer } from '@/server/mail/mailer';
 import { ConfigError, parseEnv } from '@/server/env';
 import { createLogger } from '@/server/logger';
 import { APP_VERSION } from '@/server/version';
@@ -55,7 +57,34 @@ async function main(): Promise<void> {
   }
 
   const db = createDb(env.DATABASE_URL);
-  const app = createApp({ db, logger, version: APP_VERSION, webDir: env.WEB_DIR, jsonLimit: env.JSON_LIMIT });
+  let fakeSmtp: FakeSmtp | null = null;
+  let mailer: Mailer | null = null;
+  if (env.SMTP_URL) {
+    mailer = createMailer(env.SMTP_URL, env.MAIL_FROM);
+  } else if (env.NODE_ENV !== 'production') {
+    try {
+      fakeSmtp = await startFakeSmtp(db.db, { port: env.LOCAL_SMTP_PORT });
+    } catch (err) {
+      fail(`The local mail server could not listen on 127.0.0.1:${env.LOCAL_SMTP_PORT}: ${(err as Error).message}. Set LOCAL_SMTP_PORT to a free port (0 picks one).`);
+    }
+    mailer = createMailer(fakeSmtp.url, env.MAIL_FROM);
+    logger.info({ port: fakeSmtp.port }, 'local mail server: messages are kept for the outbox screen');
+  } else {
+    logger.warn('SMTP_URL is not set: invitations and password links cannot be mailed');
+  }
+  const app = createApp({
+    db,
+    logger,
+    version: APP_VERSION,
+    webDir: env.WEB_DIR,
+    jsonLimit: env.JSON_LIMIT,
+    mailer,
+    outbox: fakeSmtp !== null,
+    publicUrl: env.PUBLIC_URL,
+    // Served over HTTPS (a TLS proxy in front): Secure cookie, HSTS.
+    https: env.PUBLIC_URL?.startsWith('https://') === true,
+    signInLimits: { perAccount: env.SIGNIN_LIMIT_ACCOUNT, perIp: env.SIGNIN_LIMIT_IP, windowMinutes: env.SIGNIN_WINDOW_MINUTES },
+  });
   const server: Server = app.listen(env.PORT, env.HOST);
 
   server.on('error', (err: NodeJS.ErrnoException) => {
@@ -80,7 +109,8 @@ async function main(): Promise<void> {
     logger.info({ signal }, 'shutting down');
     setTimeout(() => server.closeAllConnections(), SHUTDOWN_GRACE_MS);
     server.close(() => {
-      db.close().finally(() => process.exit(0));
+      mailer?.close();
+      Promise.all([fakeSmtp?.close(), db.close()]).finally(() => process.exit(0));
     });
     server.closeIdleConnections();
   };

@@ -10,6 +10,7 @@ export const ERROR_CODES = [
   'forbidden',
   'bad_origin',
   'not_found',
+  'gone',
   'conflict',
   'rate_limited',
   'db_unavailable',

@@ -49,7 +49,8 @@ describe('audit_log and the demo seed', () => {
   it('seeds once per seed version, also when two seeds race', async () => {
     const results = await Promise.all([seedDemo(handle.db), seedDemo(handle.db)]);
     const again = await seedDemo(handle.db);
-    expect(results.filter((r) => r.applied)).toHaveLength(1);
+    // At most one of them applies it (another test file may have seeded this database first).
+    expect(results.filter((r) => r.applied).length).toBeLessThanOrEqual(1);
     expect(again.applied).toBe(false);
     const rows = await handle.db.select().from(auditLog).where(eq(auditLog.action, 'demo.seeded'));
     expect(rows).toHaveLength(1);

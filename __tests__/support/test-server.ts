@@ -4,43 +4,66 @@ import type { Server } from 'node:http';
 import os from 'node:os';
 import path from 'node:path';
 
+import type { Express } from 'express';
 import request from 'supertest';
 
 import { createDb, type DbHandle } from '@/db/client';
 import { createApp } from '@/server/app';
+import type { SignInLimits } from '@/server/auth/context';
 import { createLogger } from '@/server/logger';
+import { type FakeSmtp, startFakeSmtp } from '@/server/mail/fake-smtp';
+import { createMailer } from '@/server/mail/mailer';
 
 export type TestServer = {
+  app: Express;
   server: Server;
   origin: string;
   db: DbHandle;
   webDir: string;
+  /** The local fake SMTP server; its messages land in outbox_messages. */
+  smtp: FakeSmtp;
   agent: () => ReturnType<typeof request.agent>;
   close: () => Promise<void>;
 };
 
 /** Starts the app against DATABASE_URL (or `dbUrl`) with a throwaway web build folder. */
-export async function startTestServer(options: { dbUrl?: string; webDir?: string } = {}): Promise<TestServer> {
+export async function startTestServer(options: { dbUrl?: string; webDir?: string; signInLimits?: SignInLimits } = {}): Promise<TestServer> {
   const url = options.dbUrl ?? process.env.DATABASE_URL;
   if (!url) throw new Error('DATABASE_URL is not set: the server project global setup makes it.');
   const db = createDb(url, { max: 4, connectTimeoutS: 2 });
   const ownWebDir = !options.webDir;
   const webDir = options.webDir ?? fs.mkdtempSync(path.join(os.tmpdir(), 'ligandry-web-'));
-  const app = createApp({ db, logger: createLogger('silent'), version: '0.0.0-test', webDir });
+  const smtp = await startFakeSmtp(db.db);
+  const mailer = createMailer(smtp.url, 'Ligandry test <no-reply@ligandry.test>');
+  let origin = '';
+  const app = createApp({
+    db,
+    logger: createLogger('silent'),
+    version: '0.0.0-test',
+    webDir,
+    mailer,
+    outbox: true,
+    publicUrl: () => origin,
+    ...(options.signInLimits ? { signInLimits: options.signInLimits } : {}),
+  });
   const server = app.listen(0, '127.0.0.1');
   await new Promise<void>((resolve) => server.once('listening', () => resolve()));
   const address = server.address();
   if (!address || typeof address === 'string') throw new Error('test server has no port');
-  const origin = `http://127.0.0.1:${address.port}`;
+  origin = `http://127.0.0.1:${address.port}`;
   return {
+    app,
     server,
     origin,
     db,
     webDir,
+    smtp,
     agent: () => request.agent(server).set('Origin', origin),
     close: async () => {
       server.closeAllConnections();
       await new Promise<void>((resolve) => server.close(() => resolve()));
+      mailer.close();
+      await smtp.close();
       await db.close();
       if (ownWebDir) fs.rmSync(webDir, { recursive: true, force: true });
     },

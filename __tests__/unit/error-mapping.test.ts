@@ -22,6 +22,9 @@ describe('toErrorResponse', () => {
   it('reports an unreachable database as 503 db_unavailable', () => {
     const err = Object.assign(new Error('connect ECONNREFUSED'), { code: 'ECONNREFUSED' });
     expect(toErrorResponse(err)).toMatchObject({ status: 503, body: { error: { code: 'db_unavailable' } } });
+    // Drizzle wraps the driver's error in its own; the code is on the cause.
+    const wrapped = Object.assign(new Error('Failed query: select ...'), { cause: err });
+    expect(toErrorResponse(wrapped)).toMatchObject({ status: 503, body: { error: { code: 'db_unavailable' } } });
   });
 
   it('hides unknown failures behind a 500 without internals', () => {

@@ -1,2 +1,3 @@
 // Every table of the product, split by domain; drizzle-kit reads this file.
 export * from './audit';
+export * from './auth';

@@ -39,7 +39,10 @@ export function toErrorResponse(err: unknown): { status: number; body: ErrorBody
     const limit = e.limit ? ` (limit ${e.limit} bytes)` : '';
     return { status: 413, body: body('payload_too_large', `The request body is too large${limit}.`) };
   }
-  if (e?.code && DB_DOWN_CODES.has(e.code)) {
+  // Drizzle wraps the driver's error: the connection code is on its cause.
+  const cause = (err as { cause?: { code?: string } } | null)?.cause;
+  const dbCode = e?.code ?? cause?.code;
+  if (dbCode && DB_DOWN_CODES.has(dbCode)) {
     return {
       status: 503,
       body: body('db_unavailable', 'The database is not answering right now. Try again in a moment.'),

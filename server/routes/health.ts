@@ -1,6 +1,7 @@
 import { Router } from 'express';
 
 import type { DbHandle } from '@/db/client';
+import { open } from '@/server/auth/access';
 import type { Health } from '@/shared/health';
 
 /** How long the health check waits for the database before calling it down, in milliseconds. */
@@ -25,7 +26,7 @@ async function databaseAnswers(handle: DbHandle): Promise<boolean> {
 /** GET /api/health: open to everyone (load balancers, the app's status dot); 503 when the database is down. */
 export function healthRouter(handle: DbHandle, version: string): Router {
   const router = Router();
-  router.get('/health', async (_req, res) => {
+  router.get('/health', open, async (_req, res) => {
     const up = await databaseAnswers(handle);
     const payload: Health = { status: up ? 'ok' : 'degraded', db: up ? 'up' : 'down', version };
     res.set('Cache-Control', 'no-store').status(up ? 200 : 503).json(payload);
