@@ -26,19 +26,31 @@ function buildResult(tab: Tableau, asm: Assemblage, possible: number[]): Omit<So
   const free: Record<string, number> = {};
   const species: Record<string, number> = {};
   const gamma: Record<string, number> = {};
+  // gamma depends only on z^2: one exponential per whole charge size up to 8.
+  const byZ2: number[] = [];
+  const gammaOf = (z: number): number => {
+    const z2 = z * z;
+    if (z2 > 64 || !Number.isInteger(z2)) return finiteOr(Math.exp(asm.phiValue * z2), 1);
+    let g = byZ2[z2];
+    if (g === undefined) {
+      g = finiteOr(Math.exp(asm.phiValue * z2), 1);
+      byZ2[z2] = g;
+    }
+    return g;
+  };
   for (let j = 0; j < tab.nc; j++) {
     const name = tab.components[j] as string;
     const k = asm.componentRow[j] as number;
-    const value = k >= 0 ? (asm.x[k] as number) : tab.fixed[j] ? (tab.fixedValue[j] as number) : 0;
-    free[name] = finiteOr(value, 0);
-    species[name] = free[name];
-    gamma[name] = finiteOr(Math.exp(asm.lnGammaComponent(j)), 1);
+    const value = finiteOr(k >= 0 ? (asm.x[k] as number) : tab.fixed[j] ? (tab.fixedValue[j] as number) : 0, 0);
+    free[name] = value;
+    species[name] = value;
+    gamma[name] = gammaOf(tab.componentCharge[j] as number);
   }
   for (let i = 0; i < tab.ns; i++) {
     const name = tab.speciesNames[i] as string;
     const r = asm.speciesRow[i] as number;
     species[name] = r >= 0 ? finiteOr(asm.c[r] as number, 0) : 0;
-    gamma[name] = finiteOr(Math.exp(asm.lnGammaSpecies(i)), 1);
+    gamma[name] = gammaOf(tab.speciesCharge[i] as number);
   }
   const solids: Record<string, number> = {};
   for (let r = 0; r < asm.p; r++) {
