@@ -106,6 +106,12 @@ export class Assemblage {
    * Hessian is positive definite, so that damped Newton cannot stall.
    */
   linearOnly = false;
+  /**
+   * Fallback for sets with solids: after each step, the present solids' products set one
+   * unknown each exactly (projectSolids). Helps when a very insoluble solid takes nearly all of
+   * a component; off by default because elsewhere it can pull the start into a worse region.
+   */
+  projection = false;
   /** Set while the ionic-strength fallback holds s and solves the rest around it. */
   private ionHeld = false;
   // state
@@ -134,6 +140,11 @@ export class Assemblage {
   private readonly step: Float64Array;
   private readonly saveLnx: Float64Array;
   private readonly saveN: Float64Array;
+  /** Per present solid, the unknown whose ln x its solubility product sets (projection), or -1. */
+  private readonly pivot: Int32Array;
+  private pivotsReady = false;
+  private readonly pm: Float64Array;
+  private readonly prhs: Float64Array;
   trace: TraceLine[] | null = null;
 
   /** Work space for tableaux of up to nc components, ns species and nsol solids. */
@@ -181,6 +192,9 @@ export class Assemblage {
     this.step = new Float64Array(maxDim);
     this.saveLnx = new Float64Array(nc);
     this.saveN = new Float64Array(nsol);
+    this.pivot = new Int32Array(nsol);
+    this.pm = new Float64Array(nsol * nsol);
+    this.prhs = new Float64Array(nsol);
   }
 
   /** Sets up the unknowns and equations for one set of present solids. */
@@ -272,11 +286,13 @@ export class Assemblage {
     this.lastLnx.fill(NaN);
     this.lastL.fill(NaN);
     this.solidsIndependent = p === 0 || rowsIndependent(this.bu, p, m, this.J);
+    this.pivotsReady = false;
     this.mode = tab.activity === 'ideal' ? 'ideal' : tab.fixedIonicStrength !== null ? 'held' : 'free';
     this.ionActive = false;
     this.ionHeld = false;
     this.solidLogForm = false;
     this.linearOnly = false;
+    this.projection = false;
     this.dim = m + p;
     this.s = 0;
     return this;
@@ -558,6 +574,70 @@ export class Assemblage {
   }
 
   /**
+   * Picks, for the present solids, one unknown each whose ln x their solubility products will set
+   * (the limiting component: smallest total per formula unit), keeping the p-by-p block of
+   * coefficients independent. Returns false when no such choice exists.
+   */
+  private choosePivots(): boolean {
+    const { m, p, bu, pivot } = this;
+    const taken = this.saveLnx; // scratch: 1 where a column is chosen
+    for (let k = 0; k < m; k++) taken[k] = 0;
+    for (let r = 0; r < p; r++) {
+      let best = -1;
+      let bestLimit = Infinity;
+      for (let k = 0; k < m; k++) {
+        const b = bu[r * m + k] as number;
+        if (b <= 0 || taken[k]) continue;
+        const limit = (this.T[k] as number) / b;
+        if (limit < bestLimit) {
+          best = k;
+          bestLimit = limit;
+        }
+      }
+      if (best < 0) return false;
+      pivot[r] = best;
+      taken[best] = 1;
+    }
+    // The block must be solvable: check with a throwaway copy.
+    for (let r = 0; r < p; r++) for (let q = 0; q < p; q++) this.pm[r * p + q] = bu[r * m + (pivot[q] as number)] as number;
+    for (let r = 0; r < p; r++) this.prhs[r] = 1;
+    return solveInPlace(this.pm, this.prhs, p, 1e-9);
+  }
+
+  /**
+   * Sets the pivot unknowns so that every present solid sits exactly at its solubility product
+   * (log IAP = log Ksp is linear in ln x). Far from the answer this spares Newton the crawl of a
+   * nearly exhausted component down many e-folds; at the answer it changes nothing.
+   */
+  private projectSolids(): void {
+    const { m, p, bu, pivot, lnx } = this;
+    if (p === 0) return;
+    if (!this.pivotsReady) {
+      this.pivotsReady = true;
+      if (!this.choosePivots()) pivot[0] = -1;
+    }
+    if (pivot[0] === -1) return;
+    const phi = this.mode !== 'ideal' ? phiAt(this.s, this.tab.daviesA) : 0;
+    for (let r = 0; r < p; r++) {
+      let rhs = -((this.sbase0[r] as number) + phi * (this.qB[r] as number));
+      for (let k = 0; k < m; k++) {
+        const b = bu[r * m + k] as number;
+        if (b === 0) continue;
+        let isPivot = false;
+        for (let q = 0; q < p; q++) if (pivot[q] === k) isPivot = true;
+        if (!isPivot) rhs -= b * (lnx[k] as number);
+      }
+      this.prhs[r] = rhs;
+      for (let q = 0; q < p; q++) this.pm[r * p + q] = bu[r * m + (pivot[q] as number)] as number;
+    }
+    if (!solveInPlace(this.pm, this.prhs, p, 1e-9)) return;
+    for (let q = 0; q < p; q++) {
+      const v = this.prhs[q] as number;
+      if (Number.isFinite(v)) lnx[pivot[q] as number] = Math.max(-3 * MAX_LN, Math.min(MAX_LN, v));
+    }
+  }
+
+  /**
    * Start-up relaxation: Gauss-Seidel sweeps of a one-unknown Newton step on each balance (in
    * log form where all terms are positive). Far from the answer one complex often dominates
    * several balances at once and the full Jacobian is then nearly singular; these sweeps walk
@@ -592,6 +672,7 @@ export class Assemblage {
   /** Damped Newton from the current state. */
   newton(maxIterations: number, tolerance: number): NewtonOutcome {
     const { m } = this;
+    if (this.projection) this.projectSolids();
     this.evaluate();
     if (this.distance() > 1) this.relax(40, 0.5);
     if (this.maybeActivateIon()) this.evaluate();
@@ -641,6 +722,7 @@ export class Assemblage {
         for (let k = 0; k < m; k++) this.lnx[k] = (this.saveLnx[k] as number) + lambda * (this.step[k] as number);
         for (let r = 0; r < this.p; r++) this.n[r] = (this.saveN[r] as number) + lambda * (this.step[m + r] as number);
         if (this.ionActive) this.s = Math.max(0.5 * s0, s0 + lambda * (this.step[dim - 1] as number));
+        if (this.projection) this.projectSolids();
         this.evaluate();
         const better = convex ? this.potential() <= f0 + 1e-4 * lambda * slope : this.residualVector() < merit;
         if (better) {

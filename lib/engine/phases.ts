@@ -147,7 +147,8 @@ class PhaseLoop {
   /**
    * Solves one set of solids: Newton from the carried state; with solids, Newton again with the
    * log form for their balances; under Davies, the ionic-strength fallback from the same start;
-   * then the bracketing sweeps from the start with no solid amounts, and Newton once more.
+   * then the bracketing sweeps from the start with no solid amounts, and Newton once more; last,
+   * with solids, Newton with the solids' products projected onto one unknown each.
    */
   attempt(present: number[]): { asm: Assemblage; out: NewtonOutcome } {
     let asm = this.load(present, true);
@@ -171,6 +172,12 @@ class PhaseLoop {
     if (this.shouldRetry(out, present)) {
       asm = this.load(present, false);
       asm.bracketSweeps(FALLBACK_SWEEPS);
+      out = asm.newton(this.maxIterations * 2, this.tolerance);
+      this.iterations += out.iterations;
+    }
+    if (this.shouldRetry(out, present) && present.length > 0) {
+      asm = this.load(present, true);
+      asm.projection = true;
       out = asm.newton(this.maxIterations * 2, this.tolerance);
       this.iterations += out.iterations;
     }
