@@ -1,6 +1,6 @@
 import type { Browser } from 'playwright-core';
 
-import { launchChromium, shoot, VIEWPORTS, watchPage } from '@/__tests__/support/browser';
+import { launchChromium, shoot, signInByApi, VIEWPORTS, watchPage } from '@/__tests__/support/browser';
 
 const BASE = process.env.LIGANDRY_BROWSER_URL as string;
 const TABS = [
@@ -24,6 +24,7 @@ afterAll(async () => {
 describe.each(VIEWPORTS)('app shell at $name size ($width x $height)', (viewport) => {
   it('renders every tab with the bundled font, no console errors and no outside requests', async () => {
     const context = await browser.newContext({ viewport: { width: viewport.width, height: viewport.height } });
+    await signInByApi(context, BASE, 'chemist@ligandry.test');
     const page = await context.newPage();
     const seen = watchPage(page);
 
@@ -73,6 +74,7 @@ describe.each(VIEWPORTS)('app shell at $name size ($width x $height)', (viewport
 
   it('moves between sections by keyboard alone, and each screen has one h1 naming it', async () => {
     const context = await browser.newContext({ viewport: { width: viewport.width, height: viewport.height } });
+    await signInByApi(context, BASE, 'chemist@ligandry.test');
     const page = await context.newPage();
     await page.goto(`${BASE}/baths`, { waitUntil: 'networkidle' });
     await page.getByRole('tab', { name: 'Calculate' }).focus();
@@ -92,6 +94,7 @@ describe.each(VIEWPORTS)('app shell at $name size ($width x $height)', (viewport
       viewport: { width: viewport.width, height: viewport.height },
       colorScheme: 'dark',
     });
+    await signInByApi(context, BASE, 'chemist@ligandry.test');
     const page = await context.newPage();
     await page.goto(`${BASE}/safety`, { waitUntil: 'networkidle' });
     await page.getByRole('tab').first().waitFor();

@@ -2,7 +2,7 @@
 import fs from 'node:fs';
 import path from 'node:path';
 
-import { chromium, type Browser, type Page } from 'playwright-core';
+import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
 
 /** Where screenshots go (git-ignored). */
 export const ARTIFACTS = path.resolve(__dirname, '../../test-artifacts/screenshots');
@@ -45,4 +45,18 @@ export function watchPage(page: Page): { errors: string[]; requests: string[] } 
 export async function shoot(page: Page, name: string): Promise<void> {
   fs.mkdirSync(ARTIFACTS, { recursive: true });
   await page.screenshot({ path: path.join(ARTIFACTS, `${name}.png`), fullPage: true });
+}
+
+/** The demo password seeded by the server (demo accounts only). */
+export const DEMO_PASSWORD = 'ligandry-demo';
+
+/** Signs the browser context in through the API (the session cookie lands in the context). */
+export async function signInByApi(context: BrowserContext, base: string, email: string, password = DEMO_PASSWORD): Promise<void> {
+  const res = await context.request.post(`${base}/api/auth/sign-in`, { data: { email, password }, headers: { Origin: base } });
+  if (res.status() !== 200) throw new Error(`sign-in of ${email} answered ${res.status()}: ${await res.text()}`);
+}
+
+/** Whether the page is wider than its viewport (something sticks out sideways). */
+export async function overflowsSideways(page: Page): Promise<boolean> {
+  return (await page.evaluate('document.documentElement.scrollWidth > window.innerWidth + 1')) as boolean;
 }

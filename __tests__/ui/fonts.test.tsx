@@ -1,6 +1,6 @@
 import { renderRouter, screen } from 'expo-router/testing-library';
 
-import { healthyReply, jsonResponse, mockFetch } from './helpers';
+import { mockApi } from './helpers';
 
 let mockFontState: [boolean, Error | null] = [true, null];
 
@@ -10,7 +10,7 @@ jest.mock('expo-font', () => ({
 }));
 
 beforeEach(() => {
-  mockFetch().mockResolvedValue(jsonResponse(200, healthyReply));
+  mockApi();
 });
 
 describe('font loading in the root layout', () => {

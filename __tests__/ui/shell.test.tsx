@@ -1,11 +1,11 @@
 import { fireEvent, renderRouter, screen } from 'expo-router/testing-library';
 
-import { healthyReply, jsonResponse, mockFetch } from './helpers';
+import { mockApi } from './helpers';
 
 const TAB_NAMES = ['Baths', 'Calculate', 'Library', 'Safety', 'Account'];
 
 beforeEach(() => {
-  mockFetch().mockResolvedValue(jsonResponse(200, healthyReply));
+  mockApi();
 });
 
 describe('app shell on a phone', () => {
@@ -44,7 +44,7 @@ describe('app shell on a phone', () => {
     expect(view.getPathname()).toBe('/safety');
 
     fireEvent.press(screen.getByRole('tab', { name: 'Account' }));
-    expect(await screen.findByText('Not signed in')).toBeOnTheScreen();
+    expect(await screen.findByText('cora@shop.test')).toBeOnTheScreen();
     expect(view.getPathname()).toBe('/account');
 
     fireEvent.press(screen.getByRole('tab', { name: 'Baths' }));

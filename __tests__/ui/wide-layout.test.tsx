@@ -1,12 +1,12 @@
 import { Dimensions } from 'react-native';
 import { fireEvent, renderRouter, screen } from 'expo-router/testing-library';
 
-import { healthyReply, jsonResponse, mockFetch } from './helpers';
+import { mockApi } from './helpers';
 
 const phone = Dimensions.get('window');
 
 beforeEach(() => {
-  mockFetch().mockResolvedValue(jsonResponse(200, healthyReply));
+  mockApi();
   Dimensions.set({
     window: { width: 1280, height: 800, scale: 1, fontScale: 1 },
     screen: { width: 1280, height: 800, scale: 1, fontScale: 1 },
@@ -39,7 +39,7 @@ describe('app shell on a wide screen', () => {
   });
 
   it('reports a server that cannot be reached in the rail footer', async () => {
-    mockFetch().mockRejectedValue(new TypeError('Failed to fetch'));
+    mockApi({ '/api/health': 'network' });
     renderRouter('./app', { initialUrl: '/baths' });
     expect(await screen.findByText('Server not reachable')).toBeOnTheScreen();
   });

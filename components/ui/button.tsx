@@ -5,27 +5,58 @@ import { useTheme } from '@/components/theme/use-theme';
 import { ThemedText } from '@/components/ui/themed-text';
 import { useFocusVisible } from '@/components/ui/use-focus-visible';
 
-type Props = { label: string; onPress: () => void; accessibilityHint?: string };
+/** How loud a button is: outlined (secondary), filled (the form's main action) or danger (ends something). */
+export type ButtonVariant = 'outline' | 'primary' | 'danger';
 
-/** A quiet outlined action button, for secondary actions such as retrying a request. */
-export function Button({ label, onPress, accessibilityHint }: Props) {
+type Props = {
+  label: string;
+  onPress: () => void;
+  accessibilityHint?: string;
+  accessibilityLabel?: string;
+  variant?: ButtonVariant;
+  disabled?: boolean;
+  testID?: string;
+};
+
+/** An action button; outlined by default, for secondary actions such as retrying a request. */
+export function Button({
+  label,
+  onPress,
+  accessibilityHint,
+  accessibilityLabel,
+  variant = 'outline',
+  disabled = false,
+  testID,
+}: Props) {
   const { palette } = useTheme();
   const focus = useFocusVisible();
+  const filled = variant === 'primary';
+  const ink = variant === 'danger' ? palette.danger : palette.primary;
   return (
     <Pressable
       accessibilityRole="button"
       accessibilityHint={accessibilityHint}
+      accessibilityLabel={accessibilityLabel}
+      accessibilityState={{ disabled }}
+      aria-disabled={disabled}
+      disabled={disabled}
+      testID={testID}
       onPress={onPress}
       onFocus={focus.onFocus}
       onBlur={focus.onBlur}
       style={(state) => [
         styles.button,
-        { borderColor: palette.primary },
-        (state.pressed || (state as { hovered?: boolean }).hovered) && { backgroundColor: palette.primarySoft },
-        focus.visible && [styles.focusRing, { outlineColor: palette.primary }],
+        { borderColor: ink },
+        filled && { backgroundColor: ink },
+        !filled &&
+          (state.pressed || (state as { hovered?: boolean }).hovered) && {
+            backgroundColor: variant === 'danger' ? palette.dangerSoft : palette.primarySoft,
+          },
+        disabled && styles.disabled,
+        focus.visible && [styles.focusRing, { outlineColor: ink }],
       ]}
     >
-      <ThemedText variant="label" tone="primary">
+      <ThemedText variant="label" tone={filled ? 'onPrimary' : variant === 'danger' ? 'danger' : 'primary'}>
         {label}
       </ThemedText>
     </Pressable>
@@ -40,5 +71,6 @@ const styles = StyleSheet.create({
     borderRadius: radius.md,
     borderWidth: 1.5,
   },
+  disabled: { opacity: 0.55 },
   focusRing: { outlineStyle: 'solid', outlineWidth: 2, outlineOffset: 2 },
 });

@@ -1,3 +1,4 @@
+import { type Href } from 'expo-router';
 import Head from 'expo-router/head';
 import { type ReactNode } from 'react';
 import { ScrollView, StyleSheet, View } from 'react-native';
@@ -6,15 +7,16 @@ import { useSafeAreaInsets } from 'react-native-safe-area-context';
 import { space } from '@/components/theme/tokens';
 import { useIsWide } from '@/components/theme/use-is-wide';
 import { useTheme } from '@/components/theme/use-theme';
+import { TextLink } from '@/components/ui/text-link';
 import { ThemedText } from '@/components/ui/themed-text';
 
 /** Widest the reading column grows on large screens, so lines stay a readable length. */
 export const MAX_CONTENT_WIDTH = 960;
 
-type Props = { title: string; subtitle?: string; children?: ReactNode };
+type Props = { title: string; subtitle?: string; children?: ReactNode; back?: { href: Href; label: string } };
 
-/** Frame for every screen body: page title, optional subtitle, scrolling column and the tab title. */
-export function ScreenContainer({ title, subtitle, children }: Props) {
+/** Frame for every screen body: optional way back, page title, optional subtitle, scrolling column and the tab title. */
+export function ScreenContainer({ title, subtitle, children, back }: Props) {
   const { palette } = useTheme();
   const insets = useSafeAreaInsets();
   const wide = useIsWide();
@@ -33,6 +35,7 @@ export function ScreenContainer({ title, subtitle, children }: Props) {
       >
         <View style={styles.column}>
           <View style={styles.header}>
+            {back ? <TextLink href={back.href} label={`‹ ${back.label}`} accessibilityLabel={`Back to ${back.label}`} /> : null}
             <ThemedText variant="display" accessibilityRole="header">
               {title}
             </ThemedText>

@@ -1,4 +1,4 @@
-import { type z } from 'zod';
+import { z } from 'zod';
 
 import { errorBodySchema } from '@/shared/errors';
 
@@ -49,7 +49,8 @@ export async function apiFetch<S extends z.ZodType>(
     throw new ApiError(0, 'network', NETWORK_MESSAGE, cause instanceof Error ? cause.message : undefined);
   }
 
-  const body = await readJson(response);
+  // 204 No Content has no body to read.
+  const body = response.status === 204 ? undefined : await readJson(response);
   if (!response.ok && !options.dataStatuses?.includes(response.status)) {
     const parsed = errorBodySchema.safeParse(body);
     if (parsed.success) {
@@ -74,4 +75,21 @@ export async function apiFetch<S extends z.ZodType>(
 /** True for errors that repeating the same request will not fix (the server said no). */
 export function isClientError(error: unknown): boolean {
   return error instanceof ApiError && error.status >= 400 && error.status < 500;
+}
+
+/** Schema for replies that carry no body (204 No Content). */
+export const noContent = z.undefined();
+
+/** Sends `body` as JSON with `method` and returns the reply checked against `schema` (ApiError on failure). */
+export function apiSend<S extends z.ZodType>(
+  method: 'POST' | 'PATCH' | 'PUT' | 'DELETE',
+  path: string,
+  schema: S,
+  body?: unknown,
+): Promise<z.infer<S>> {
+  const init: RequestInit =
+    body === undefined
+      ? { method }
+      : { method, headers: { 'Content-Type': 'application/json' }, body: JSON.stringify(body) };
+  return apiFetch(path, schema, init);
 }

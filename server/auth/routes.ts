@@ -92,7 +92,7 @@ export function authRouter(ctx: AuthContext): Router {
     ctx.signInByAccount.clear(input.email);
     await db.transaction(async (tx) => {
       await tx.update(users).set({ lastSignInAt: new Date() }).where(eq(users.id, row.id));
-      await writeAudit(tx, { actor: row.id, action: 'auth.sign_in', subject: `user:${row.id}`, payload: { ip } });
+      await writeAudit(tx, { actor: row.id, action: 'auth.sign_in', subject: `user:${row.id}`, payload: { email: row.email, ip } });
     });
     await startSession(lucia, res, row.id);
     res.json(toUser(row));
@@ -129,7 +129,7 @@ export function authRouter(ctx: AuthContext): Router {
       await tx.update(users).set({ passwordHash: hash, passwordChangedAt: now, updatedAt: now }).where(eq(users.id, me.id));
       await tx.delete(sessions).where(eq(sessions.userId, me.id));
       await tx.update(passwordResets).set({ usedAt: now }).where(and(eq(passwordResets.userId, me.id), isNull(passwordResets.usedAt)));
-      await writeAudit(tx, { actor: me.id, action: 'auth.password_changed', subject: `user:${me.id}` });
+      await writeAudit(tx, { actor: me.id, action: 'auth.password_changed', subject: `user:${me.id}`, payload: { email: me.email } });
     });
     res.locals.session = null;
     await startSession(lucia, res, me.id);
@@ -140,7 +140,7 @@ export function authRouter(ctx: AuthContext): Router {
     const me = requireUser(res);
     await lucia.invalidateUserSessions(me.id);
     res.locals.session = null;
-    await writeAudit(db, { actor: me.id, action: 'auth.signed_out_everywhere', subject: `user:${me.id}` });
+    await writeAudit(db, { actor: me.id, action: 'auth.signed_out_everywhere', subject: `user:${me.id}`, payload: { email: me.email } });
     await endSession(lucia, res);
     res.status(204).end();
   });
@@ -213,7 +213,7 @@ export function authRouter(ctx: AuthContext): Router {
       if (!row) throw new HttpError(410, 'gone', 'This account has been deactivated. Ask an admin.');
       await tx.update(passwordResets).set({ usedAt: now }).where(and(eq(passwordResets.userId, row.id), isNull(passwordResets.usedAt)));
       await tx.delete(sessions).where(eq(sessions.userId, row.id));
-      await writeAudit(tx, { actor: row.id, action: 'auth.password_reset', subject: `user:${row.id}` });
+      await writeAudit(tx, { actor: row.id, action: 'auth.password_reset', subject: `user:${row.id}`, payload: { email: row.email } });
       return row;
     });
     res.locals.session = null;
@@ -262,7 +262,7 @@ export function authRouter(ctx: AuthContext): Router {
         .returning();
       if (!row) throw new Error('insert returned no row');
       await tx.update(invitations).set({ acceptedAt: now, acceptedUserId: row.id }).where(eq(invitations.id, inv.id));
-      await writeAudit(tx, { actor: row.id, action: 'auth.invitation_accepted', subject: `user:${row.id}`, payload: { invitation: inv.id, roles: inv.roles } });
+      await writeAudit(tx, { actor: row.id, action: 'auth.invitation_accepted', subject: `user:${row.id}`, payload: { email: inv.email, invitation: inv.id, roles: inv.roles } });
       return row;
     });
     res.locals.session = null;

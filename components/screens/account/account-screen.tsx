@@ -1,17 +1,31 @@
+import { AdminCard } from '@/components/screens/account/admin-card';
 import { InstallationCard } from '@/components/screens/account/installation-card';
-import { PersonIcon } from '@/components/shell/icons';
-import { EmptyState } from '@/components/ui/empty-state';
+import { PasswordCard } from '@/components/screens/account/password-card';
+import { ProfileCard } from '@/components/screens/account/profile-card';
+import { SessionsCard } from '@/components/screens/account/sessions-card';
+import { ErrorState } from '@/components/ui/error-state';
+import { LoadingState } from '@/components/ui/loading-state';
 import { ScreenContainer } from '@/components/ui/screen-container';
+import { useMe } from '@/lib/api/use-me';
+import { hasRole } from '@/shared/auth';
 
-/** Account section: nobody can sign in yet; shows what this installation is running instead. */
+/** Account section: who you are, your password and sessions, admin links, and what this installation runs. */
 export function AccountScreen() {
+  const { data: me, error, mutate } = useMe();
   return (
     <ScreenContainer title="Account">
-      <EmptyState
-        Icon={PersonIcon}
-        title="Not signed in"
-        body="Team sign-in is not set up in this build."
-      />
+      {me ? (
+        <>
+          <ProfileCard key={me.id} user={me} />
+          {hasRole(me, 'admin') ? <AdminCard /> : null}
+          <PasswordCard />
+          <SessionsCard />
+        </>
+      ) : error ? (
+        <ErrorState message={error.message} onRetry={() => void mutate()} />
+      ) : (
+        <LoadingState label="Loading your account…" />
+      )}
       <InstallationCard />
     </ScreenContainer>
   );

@@ -1,0 +1,96 @@
+import { useState } from 'react';
+import { StyleSheet } from 'react-native';
+
+import { MISMATCH } from '@/components/screens/auth/passwords';
+import { space } from '@/components/theme/tokens';
+import { Button } from '@/components/ui/button';
+import { Card } from '@/components/ui/card';
+import { Notice } from '@/components/ui/notice';
+import { TextField } from '@/components/ui/text-field';
+import { ThemedText } from '@/components/ui/themed-text';
+import { checkForm, errorsFromApi, NO_ERRORS, type FormErrors } from '@/lib/api/form-errors';
+import { useChangePassword } from '@/lib/api/use-me';
+import { changePasswordSchema, PASSWORD_MIN } from '@/shared/auth';
+
+const FIELDS = ['currentPassword', 'newPassword', 'confirm'] as const;
+
+/** Words shown once the password is changed. */
+export const PASSWORD_CHANGED = 'Password changed; other sessions were signed out';
+
+/** Changes the password: current, new and new again; the server signs out every other session. */
+export function PasswordCard() {
+  const [currentPassword, setCurrent] = useState('');
+  const [newPassword, setNew] = useState('');
+  const [confirm, setConfirm] = useState('');
+  const [errors, setErrors] = useState<FormErrors>(NO_ERRORS);
+  const [done, setDone] = useState(false);
+  const { trigger, isMutating } = useChangePassword();
+
+  const submit = async () => {
+    if (isMutating) return;
+    setDone(false);
+    const check = checkForm(changePasswordSchema, { currentPassword, newPassword }, FIELDS);
+    const fields = check.ok ? {} : { ...check.errors.fields };
+    if (newPassword !== confirm) fields.confirm ??= MISMATCH;
+    if (!check.ok || fields.confirm) return setErrors({ fields, form: check.ok ? undefined : check.errors.form });
+    setErrors(NO_ERRORS);
+    try {
+      await trigger(check.data);
+      setCurrent('');
+      setNew('');
+      setConfirm('');
+      setDone(true);
+    } catch (error) {
+      setErrors(errorsFromApi(error, FIELDS));
+    }
+  };
+  const onSubmit = () => void submit();
+
+  return (
+    <Card testID="password-card" style={styles.card}>
+      <ThemedText variant="title" accessibilityRole="header" aria-level={2}>
+        Change password
+      </ThemedText>
+      {errors.form ? <Notice kind="error" message={errors.form} /> : null}
+      {done ? <Notice kind="success" message={PASSWORD_CHANGED} /> : null}
+      <TextField
+        label="Current password"
+        value={currentPassword}
+        onChangeText={setCurrent}
+        onSubmit={onSubmit}
+        error={errors.fields.currentPassword}
+        autoComplete="current-password"
+        secureTextEntry
+      />
+      <TextField
+        label="New password"
+        value={newPassword}
+        onChangeText={setNew}
+        onSubmit={onSubmit}
+        error={errors.fields.newPassword}
+        hint={`At least ${PASSWORD_MIN} characters.`}
+        autoComplete="new-password"
+        secureTextEntry
+      />
+      <TextField
+        label="New password again"
+        value={confirm}
+        onChangeText={setConfirm}
+        onSubmit={onSubmit}
+        error={errors.fields.confirm}
+        autoComplete="new-password"
+        secureTextEntry
+      />
+      <Button
+        label={isMutating ? 'Changing…' : 'Change password'}
+        accessibilityLabel="Change password"
+        disabled={isMutating}
+        onPress={onSubmit}
+      />
+    </Card>
+  );
+}
+
+const styles = StyleSheet.create({
+  card: { maxWidth: 600, gap: space.md },
+});

@@ -1,0 +1,107 @@
+import { useRouter } from 'expo-router';
+import { useState } from 'react';
+import { StyleSheet, View } from 'react-native';
+
+import { isDeadLink, LinkChecking, LinkGone } from '@/components/screens/auth/link-states';
+import { MISMATCH } from '@/components/screens/auth/passwords';
+import { HOME_PATH } from '@/components/shell/next-path';
+import { PublicFrame } from '@/components/shell/public-frame';
+import { space } from '@/components/theme/tokens';
+import { Button } from '@/components/ui/button';
+import { Notice } from '@/components/ui/notice';
+import { TextField } from '@/components/ui/text-field';
+import { ThemedText } from '@/components/ui/themed-text';
+import { ApiError } from '@/lib/api/fetcher';
+import { checkForm, errorsFromApi, NO_ERRORS, type FormErrors } from '@/lib/api/form-errors';
+import { usePasswordResetToken, useSetNewPassword } from '@/lib/api/use-auth';
+import { newPasswordSchema, PASSWORD_MIN, tokenSchema } from '@/shared/auth';
+
+const FIELDS = ['password', 'confirm'] as const;
+
+
+/** Chooses a new password through a mailed reset link; on success the person is signed in and goes home. */
+export function NewPasswordScreen({ token }: { token: string }) {
+  const valid = tokenSchema.safeParse(token).success;
+  const info = usePasswordResetToken(valid ? token : null);
+  const router = useRouter();
+  const [password, setPassword] = useState('');
+  const [confirm, setConfirm] = useState('');
+  const [errors, setErrors] = useState<FormErrors>(NO_ERRORS);
+  // The server's reason when it gave one (used, expired, withdrawn), else a general one.
+  const [gone, setGone] = useState<string | null>(null);
+  const { trigger, isMutating } = useSetNewPassword(token);
+
+  if (!valid || gone !== null || isDeadLink(info.error)) {
+    const reason = gone ?? (info.error?.status === 410 ? info.error.message : null);
+    return (
+      <LinkGone
+        title="This link no longer works"
+        body={reason ?? 'Reset links work once and only for a short time. This one was used, has expired, or was copied incompletely.'}
+        linkHref="/forgot-password"
+        linkLabel="Ask for a new link"
+      />
+    );
+  }
+  if (!info.data) return <LinkChecking title="Choose a new password" error={info.error} onRetry={() => void info.mutate()} />;
+
+  const submit = async () => {
+    if (isMutating) return;
+    const check = checkForm(newPasswordSchema, { password }, FIELDS);
+    const fields = check.ok ? {} : { ...check.errors.fields };
+    if (password !== confirm) fields.confirm = MISMATCH;
+    if (!check.ok || fields.confirm) return setErrors({ fields });
+    setErrors(NO_ERRORS);
+    try {
+      await trigger(check.data);
+      router.replace(HOME_PATH);
+    } catch (error) {
+      if (error instanceof ApiError && error.status === 410) return setGone(error.message);
+      setErrors(errorsFromApi(error, FIELDS));
+    }
+  };
+
+  return (
+    <PublicFrame title="Choose a new password">
+      <View style={styles.form}>
+        <ThemedText variant="body">
+          {'For '}
+          <ThemedText variant="body" weight="semibold">
+            {info.data.email}
+          </ThemedText>
+        </ThemedText>
+        {errors.form ? <Notice kind="error" message={errors.form} testID="form-error" /> : null}
+        <TextField
+          label="New password"
+          value={password}
+          onChangeText={setPassword}
+          onSubmit={() => void submit()}
+          error={errors.fields.password}
+          hint={`At least ${PASSWORD_MIN} characters.`}
+          autoComplete="new-password"
+          secureTextEntry
+          autoFocus
+        />
+        <TextField
+          label="New password again"
+          value={confirm}
+          onChangeText={setConfirm}
+          onSubmit={() => void submit()}
+          error={errors.fields.confirm}
+          autoComplete="new-password"
+          secureTextEntry
+        />
+        <Button
+          label={isMutating ? 'Saving…' : 'Save and sign in'}
+          accessibilityLabel="Save and sign in"
+          variant="primary"
+          disabled={isMutating}
+          onPress={() => void submit()}
+        />
+      </View>
+    </PublicFrame>
+  );
+}
+
+const styles = StyleSheet.create({
+  form: { gap: space.lg },
+});

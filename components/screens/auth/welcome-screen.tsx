@@ -1,0 +1,131 @@
+import { useRouter } from 'expo-router';
+import { useState } from 'react';
+import { StyleSheet, View } from 'react-native';
+
+import { isDeadLink, LinkChecking, LinkGone } from '@/components/screens/auth/link-states';
+import { MISMATCH } from '@/components/screens/auth/passwords';
+import { HOME_PATH } from '@/components/shell/next-path';
+import { PublicFrame } from '@/components/shell/public-frame';
+import { space } from '@/components/theme/tokens';
+import { Button } from '@/components/ui/button';
+import { Chip } from '@/components/ui/chip';
+import { Notice } from '@/components/ui/notice';
+import { TextField } from '@/components/ui/text-field';
+import { ThemedText } from '@/components/ui/themed-text';
+import { ApiError } from '@/lib/api/fetcher';
+import { checkForm, errorsFromApi, NO_ERRORS, type FormErrors } from '@/lib/api/form-errors';
+import { useAcceptInvitation, useInvitationToken } from '@/lib/api/use-auth';
+import { acceptInvitationSchema, PASSWORD_MIN, ROLE_LABELS, tokenSchema } from '@/shared/auth';
+
+const FIELDS = ['name', 'password', 'confirm'] as const;
+
+/** Accepts a mailed invitation: shows who invited whom with which roles, then name and password. */
+export function WelcomeScreen({ token }: { token: string }) {
+  const valid = tokenSchema.safeParse(token).success;
+  const info = useInvitationToken(valid ? token : null);
+  const router = useRouter();
+  const [name, setName] = useState('');
+  const [password, setPassword] = useState('');
+  const [confirm, setConfirm] = useState('');
+  const [errors, setErrors] = useState<FormErrors>(NO_ERRORS);
+  // The server's reason when it gave one (used, expired, withdrawn), else a general one.
+  const [gone, setGone] = useState<string | null>(null);
+  const { trigger, isMutating } = useAcceptInvitation(token);
+
+  if (!valid || gone !== null || isDeadLink(info.error)) {
+    const reason = gone ?? (info.error?.status === 410 ? info.error.message : null);
+    return (
+      <LinkGone
+        title="This invitation no longer works"
+        body={reason ?? 'It was already used or has expired. Ask an admin of your team to send you a new invitation.'}
+        linkHref="/sign-in"
+        linkLabel="Go to sign in"
+      />
+    );
+  }
+  if (!info.data) return <LinkChecking title="Welcome to Ligandry" error={info.error} onRetry={() => void info.mutate()} />;
+  const { email, roles, invitedBy } = info.data;
+
+  const submit = async () => {
+    if (isMutating) return;
+    const check = checkForm(acceptInvitationSchema, { name, password }, FIELDS);
+    const fields = check.ok ? {} : { ...check.errors.fields };
+    if (password !== confirm) fields.confirm = MISMATCH;
+    if (!check.ok || fields.confirm) return setErrors({ fields });
+    setErrors(NO_ERRORS);
+    try {
+      await trigger(check.data);
+      router.replace(HOME_PATH);
+    } catch (error) {
+      if (error instanceof ApiError && error.status === 410) return setGone(error.message);
+      setErrors(errorsFromApi(error, FIELDS));
+    }
+  };
+
+  return (
+    <PublicFrame title="Welcome to Ligandry" subtitle={`${invitedBy} invited you to join the team.`}>
+      <View style={styles.form}>
+        <View style={styles.facts}>
+          <ThemedText variant="label" tone="textMuted" weight="regular">
+            Your e-mail
+          </ThemedText>
+          <ThemedText variant="body" weight="semibold">
+            {email}
+          </ThemedText>
+          <ThemedText variant="label" tone="textMuted" weight="regular">
+            Your roles
+          </ThemedText>
+          <View style={styles.chips} accessibilityLabel={`Roles: ${roles.map((r) => ROLE_LABELS[r].label).join(', ')}`}>
+            {roles.map((role) => (
+              <Chip key={role} label={ROLE_LABELS[role].label} />
+            ))}
+          </View>
+        </View>
+        {errors.form ? <Notice kind="error" message={errors.form} testID="form-error" /> : null}
+        <TextField
+          label="Your name"
+          value={name}
+          onChangeText={setName}
+          onSubmit={() => void submit()}
+          error={errors.fields.name}
+          hint="As your colleagues will see it."
+          autoComplete="name"
+          autoCapitalize="words"
+          autoFocus
+        />
+        <TextField
+          label="Password"
+          value={password}
+          onChangeText={setPassword}
+          onSubmit={() => void submit()}
+          error={errors.fields.password}
+          hint={`At least ${PASSWORD_MIN} characters.`}
+          autoComplete="new-password"
+          secureTextEntry
+        />
+        <TextField
+          label="Password again"
+          value={confirm}
+          onChangeText={setConfirm}
+          onSubmit={() => void submit()}
+          error={errors.fields.confirm}
+          autoComplete="new-password"
+          secureTextEntry
+        />
+        <Button
+          label={isMutating ? 'Joining…' : 'Join the team'}
+          accessibilityLabel="Join the team"
+          variant="primary"
+          disabled={isMutating}
+          onPress={() => void submit()}
+        />
+      </View>
+    </PublicFrame>
+  );
+}
+
+const styles = StyleSheet.create({
+  form: { gap: space.lg },
+  facts: { gap: space.xs },
+  chips: { flexDirection: 'row', flexWrap: 'wrap', gap: space.xs, marginBottom: space.xs },
+});
