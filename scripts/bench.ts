@@ -31,8 +31,8 @@ import { builtInCases, EngineBugError, folderCases, type BenchCase } from './lib
 import { collect, type CaseTiming, type CurveSpec, type CurveTiming, type Figures, median, PLANS, quantile, timeCases, timeCurve } from './lib/bench-timing';
 import { InputError } from './lib/json-text';
 
-const USAGE = `Usage: npm run bench [-- [--json] [--quick] [DIR]]
-       node --expose-gc --import tsx scripts/bench.ts [--json] [--quick] [DIR]
+const USAGE = `Usage: npm run bench [-- [--json] [--quick] [DIR]]   (bundled with esbuild, as the engine ships)
+       node --expose-gc --import tsx scripts/bench.ts [--json] [--quick] [DIR]   (unbundled, through tsx)
 
 Times solve(problem) on the demo baths and on every *.json problem file in DIR (one problem or
 an array of problems per file), and a 500-point warm-started curve.

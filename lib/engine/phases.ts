@@ -34,7 +34,7 @@ const NEGATIVE_AMOUNT = 1e-14;
 const ITERATION_BUDGET = DEFAULTS.iterationBudget;
 const FALLBACK_SWEEPS = DEFAULTS.fallbackSweeps;
 const MAX_PHASE_CHANGES = DEFAULTS.maxPhaseChanges;
-const NO_SOLIDS: ReadonlySet<number> = new Set();
+const NO_SOLIDS: readonly number[] = [];
 
 function ascending(x: number, y: number): number {
   return x - y;
@@ -222,11 +222,11 @@ class PhaseLoop {
   }
 
   /** The most supersaturated possible solid not in the set, excluding some, or -1. */
-  mostSupersaturated(asm: Assemblage, exclude: ReadonlySet<number>): number {
+  mostSupersaturated(asm: Assemblage, exclude: readonly number[]): number {
     let best = -1;
     let bestSi = SUPERSATURATED;
     for (let s = 0; s < this.tab.nsol; s++) {
-      if (!this.possible[s] || exclude.has(s) || isPresent(asm, s)) continue;
+      if (!this.possible[s] || exclude.includes(s) || isPresent(asm, s)) continue;
       const si = saturationIndex(asm, s);
       if (si > bestSi) {
         best = s;
@@ -259,7 +259,7 @@ class PhaseLoop {
 }
 
 /** Solids worth trying in the subset search: all of them when few, else those involved so far. */
-function searchCandidates(tab: Tableau, possible: number[], involved: Set<number>): number[] {
+function searchCandidates(tab: Tableau, possible: number[], involved: readonly number[]): number[] {
   const all: number[] = [];
   for (let s = 0; s < tab.nsol; s++) if (possible[s]) all.push(s);
   return all.length <= 10 ? all : [...involved];
@@ -288,20 +288,21 @@ export function settlePhases(tab: Tableau, opts: { tolerance: number; maxIterati
   const loop = new PhaseLoop(tab, absent, possible, opts.tolerance, opts.maxIterations, start, opts.trace);
   let present: number[] = [];
   for (const s of start.present) if (s < tab.nsol && possible[s]) present.push(s);
-  const visited = new Set<string>();
-  const involved = new Set<number>(present);
-  const blocked = new Set<number>();
+  // Small lists (a handful of solids): arrays are cheaper than sets on every solve.
+  const visited: string[] = [];
+  const involved: number[] = [...present];
+  const blocked: number[] = [];
   let lastAdded = -1;
 
   for (let change = 0; change <= MAX_PHASE_CHANGES; change++) {
-    const key = present.slice().sort(ascending).join(',');
-    if (visited.has(key)) {
+    const key = present.length === 0 ? '' : present.length === 1 ? String(present[0]) : present.slice().sort(ascending).join(',');
+    if (visited.includes(key)) {
       const found = loop.search(searchCandidates(tab, possible, involved));
       if (found) return finishWith(loop, found.asm, true);
       const last = loop.attempt(present);
       return finishWith(loop, last.asm, false, 'The set of solids present did not settle (the phase-rule loop cycled and no consistent set was found).');
     }
-    visited.add(key);
+    visited.push(key);
     let { asm, out } = loop.attempt(present);
     if (!out.converged && out.singular && lastAdded >= 0) {
       // The added solid is not independent of those present: try it in place of each of them.
@@ -317,7 +318,7 @@ export function settlePhases(tab: Tableau, opts: { tolerance: number; maxIterati
         }
       }
       if (!swapped) {
-        blocked.add(lastAdded);
+        if (!blocked.includes(lastAdded)) blocked.push(lastAdded);
         present = without(present, lastAdded);
         lastAdded = -1;
         continue;
@@ -340,11 +341,11 @@ export function settlePhases(tab: Tableau, opts: { tolerance: number; maxIterati
     const add = loop.mostSupersaturated(asm, blocked);
     if (add >= 0) {
       present = [...present, add];
-      involved.add(add);
+      if (!involved.includes(add)) involved.push(add);
       lastAdded = add;
       continue;
     }
-    if (blocked.size > 0 && loop.mostSupersaturated(asm, NO_SOLIDS) >= 0) {
+    if (blocked.length > 0 && loop.mostSupersaturated(asm, NO_SOLIDS) >= 0) {
       return finishWith(loop, asm, false, 'A supersaturated solid could not be added: its formula is not independent of the solids present (phase rule).');
     }
     return finishWith(loop, asm, true);

@@ -69,35 +69,39 @@ function describe(value: unknown): string {
   return typeof value;
 }
 
-function readComponents(problem: Obj): { components: string[]; index: Map<string, number> } {
+/**
+ * Component names in order; positions are looked up with indexOf: lists are short (a handful of
+ * components), and a scan of them is quicker than hashing into a Map on every solve.
+ */
+type ComponentIndex = readonly string[];
+
+function readComponents(problem: Obj): { components: string[]; index: ComponentIndex } {
   const list = problem.components;
   if (!Array.isArray(list) || list.length === 0) {
     throw new EngineInputError('components', 'give a non-empty list of component names such as ["Ag+", "CN-", "H+"]');
   }
-  const index = new Map<string, number>();
   for (let i = 0; i < list.length; i++) {
     const name: unknown = list[i];
     if (typeof name !== 'string' || name.trim() === '') {
       throw new EngineInputError(`components[${i}]`, 'a component name must be a non-empty string');
     }
-    if (index.has(name)) throw new EngineInputError(`components[${i}]`, `duplicate component "${name}"`);
-    index.set(name, i);
+    if (list.indexOf(name) < i) throw new EngineInputError(`components[${i}]`, `duplicate component "${name}"`);
   }
-  return { components: list as string[], index };
+  return { components: list as string[], index: list as string[] };
 }
 
 /** Reads totals (mol/L, at least 0) or fixed free concentrations (above 0) into `into`; marks `seen`. */
-function readAmounts(problem: Obj, key: 'totals' | 'fixed', index: Map<string, number>, into: number[], seen: number[]): void {
+function readAmounts(problem: Obj, key: 'totals' | 'fixed', index: ComponentIndex, into: number[], seen: number[]): void {
   const raw = problem[key];
   if (raw === undefined) return;
   if (!isObject(raw)) throw new EngineInputError(key, 'must be an object of component name to mol/L');
   for (const name in raw) {
     const value = raw[name];
-    const j = index.get(name);
+    const j = index.indexOf(name);
     const v = typeof value === 'number' && Number.isFinite(value) ? value : NaN;
-    if (j === undefined || !(key === 'totals' ? v >= 0 : v > 0)) {
+    if (j < 0 || !(key === 'totals' ? v >= 0 : v > 0)) {
       const field = `${key}.${name}`;
-      if (j === undefined) throw new EngineInputError(field, `"${name}" is not one of the components`);
+      if (j < 0) throw new EngineInputError(field, `"${name}" is not one of the components`);
       finite(value, field, key === 'totals' ? 'a total' : 'a fixed free concentration');
       if (key === 'totals') throw new EngineInputError(field, `a total cannot be negative (got ${v} mol/L)`);
       throw new EngineInputError(field, `a fixed free concentration must be above 0 mol/L (got ${v})`);
@@ -115,7 +119,7 @@ interface Reaction {
 }
 
 interface ReadContext {
-  index: Map<string, number>;
+  index: ComponentIndex;
   nc: number;
   temperatureC: number;
   stale: string[];
@@ -136,8 +140,8 @@ function readStoich(raw: unknown, list: 'species' | 'solids', i: number, ctx: Re
   const row = zeros(ctx.nc);
   let any = false;
   for (const name in raw) {
-    const j = ctx.index.get(name);
-    if (j === undefined) {
+    const j = ctx.index.indexOf(name);
+    if (j < 0) {
       throw new EngineInputError(`${entryPath(list, i)}.stoich.${name}`, `unknown component "${name}"; add it to components or fix the name`);
     }
     const value = raw[name];
@@ -234,7 +238,7 @@ export function compileProblem(input: Problem | unknown): Tableau {
   const species: Reaction[] = [];
   for (let i = 0; i < rawSpecies.length; i++) {
     const r = readReaction(rawSpecies[i], 'species', i, ctx);
-    if (index.has(r.name) || occursBefore(species, r.name, i)) {
+    if (index.indexOf(r.name) >= 0 || occursBefore(species, r.name, i)) {
       throw new EngineInputError(`species[${i}].name`, `duplicate name "${r.name}" (components and species share one list of names)`);
     }
     species.push(r);

@@ -1,11 +1,12 @@
 // The benchmark (scripts/bench.ts) in its quick mode: the shape of its JSON, never its timings.
+import { spawnSync } from 'node:child_process';
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 
 import { DEMO_BATHS } from '@/lib/chemistry/demo-baths';
 
-import { runScript, stderrLines } from './run-script';
+import { ROOT, runScript, stderrLines } from './run-script';
 
 const bench = (args: string[]) => runScript('scripts/bench.ts', args, '', ['--expose-gc']);
 
@@ -39,6 +40,15 @@ describe('npm run bench', () => {
     expect(Object.keys(out).sort()).toEqual(['cases', 'curve500Ms', 'maxUs', 'medianUs', 'p99Us', 'solvesPerSecond']);
     for (const value of Object.values(out)) expect(Number.isFinite(value)).toBe(true);
     expect(out.cases).toBe(DEMO_BATHS.length + 1);
+  });
+
+  it('npm run bench bundles the same script and passes its arguments and exit code through', () => {
+    const out = spawnSync(process.execPath, ['scripts/bench-run.mjs', dir, '--json', '--quick'], { cwd: ROOT, encoding: 'utf8', timeout: 60_000 });
+    expect(out.status).toBe(0);
+    expect(Object.keys(JSON.parse(out.stdout)).sort()).toEqual(['cases', 'curve500Ms', 'maxUs', 'medianUs', 'p99Us', 'solvesPerSecond']);
+    const bad = spawnSync(process.execPath, ['scripts/bench-run.mjs', join(dir, 'missing')], { cwd: ROOT, encoding: 'utf8', timeout: 60_000 });
+    expect(bad.status).toBe(1);
+    expect(bad.stderr).toMatch(/missing" does not exist/);
   });
 
   it.each([
