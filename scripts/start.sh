@@ -16,5 +16,8 @@ export DATABASE_URL="${DATABASE_URL:-$(bash scripts/pg.sh url ligandry)}"
 bash scripts/build-web.sh
 
 # SEED_DEMO: the server creates the database if missing, migrates and seeds before it listens.
-export PORT HOST NODE_ENV="${NODE_ENV:-production}" SEED_DEMO=1
+# npm start is the local, demo start: NODE_ENV stays development unless set, so the demo team is
+# seeded and mail goes to the local outbox. A deployment sets NODE_ENV=production (no demo data)
+# and SMTP_URL.
+export PORT HOST NODE_ENV="${NODE_ENV:-development}" SEED_DEMO=1
 exec node --import tsx server/index.ts
