@@ -7,6 +7,7 @@ import { BrandMark } from '@/components/shell/brand-mark';
 import { space } from '@/components/theme/tokens';
 import { useTheme } from '@/components/theme/use-theme';
 import { Card } from '@/components/ui/card';
+import { ScreenHeading } from '@/components/ui/screen-heading';
 import { ThemedText } from '@/components/ui/themed-text';
 
 /** Widest the public card grows, in pixels: one short form per screen. */
@@ -36,14 +37,7 @@ export function PublicFrame({ title, subtitle, children, testID }: Props) {
         </View>
         <Card style={styles.card}>
           <View style={styles.header}>
-            <ThemedText variant="display" accessibilityRole="header">
-              {title}
-            </ThemedText>
-            {subtitle ? (
-              <ThemedText variant="body" tone="textMuted">
-                {subtitle}
-              </ThemedText>
-            ) : null}
+            <ScreenHeading title={title} subtitle={subtitle} />
           </View>
           {children}
         </Card>

@@ -15,6 +15,9 @@ type Props = {
   accessibilityLabel?: string;
   variant?: ButtonVariant;
   disabled?: boolean;
+  /** While true the button is disabled and shows busyLabel; screen readers keep hearing label. */
+  busy?: boolean;
+  busyLabel?: string;
   testID?: string;
 };
 
@@ -25,9 +28,12 @@ export function Button({
   accessibilityHint,
   accessibilityLabel,
   variant = 'outline',
-  disabled = false,
+  disabled: disabledProp = false,
+  busy = false,
+  busyLabel,
   testID,
 }: Props) {
+  const disabled = disabledProp || busy;
   const { palette } = useTheme();
   const focus = useFocusVisible();
   const filled = variant === 'primary';
@@ -36,7 +42,7 @@ export function Button({
     <Pressable
       accessibilityRole="button"
       accessibilityHint={accessibilityHint}
-      accessibilityLabel={accessibilityLabel}
+      accessibilityLabel={accessibilityLabel ?? (busy && busyLabel ? label : undefined)}
       accessibilityState={{ disabled }}
       aria-disabled={disabled}
       disabled={disabled}
@@ -57,7 +63,7 @@ export function Button({
       ]}
     >
       <ThemedText variant="label" tone={filled ? 'onPrimary' : variant === 'danger' ? 'danger' : 'primary'}>
-        {label}
+        {busy && busyLabel ? busyLabel : label}
       </ThemedText>
     </Pressable>
   );

@@ -8,7 +8,7 @@ import { space } from '@/components/theme/tokens';
 import { useIsWide } from '@/components/theme/use-is-wide';
 import { useTheme } from '@/components/theme/use-theme';
 import { TextLink } from '@/components/ui/text-link';
-import { ThemedText } from '@/components/ui/themed-text';
+import { ScreenHeading } from '@/components/ui/screen-heading';
 
 /** Widest the reading column grows on large screens, so lines stay a readable length. */
 export const MAX_CONTENT_WIDTH = 960;
@@ -36,14 +36,7 @@ export function ScreenContainer({ title, subtitle, children, back }: Props) {
         <View style={styles.column}>
           <View style={styles.header}>
             {back ? <TextLink href={back.href} label={`‹ ${back.label}`} accessibilityLabel={`Back to ${back.label}`} /> : null}
-            <ThemedText variant="display" accessibilityRole="header">
-              {title}
-            </ThemedText>
-            {subtitle ? (
-              <ThemedText variant="body" tone="textMuted">
-                {subtitle}
-              </ThemedText>
-            ) : null}
+            <ScreenHeading title={title} subtitle={subtitle} />
           </View>
           {children}
         </View>

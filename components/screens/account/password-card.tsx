@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { StyleSheet } from 'react-native';
 
-import { MISMATCH } from '@/components/screens/auth/passwords';
+import { MISMATCH, NewPasswordFields } from '@/components/screens/auth/new-password-fields';
 import { space } from '@/components/theme/tokens';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
@@ -10,7 +10,7 @@ import { TextField } from '@/components/ui/text-field';
 import { ThemedText } from '@/components/ui/themed-text';
 import { checkForm, errorsFromApi, NO_ERRORS, type FormErrors } from '@/lib/api/form-errors';
 import { useChangePassword } from '@/lib/api/use-me';
-import { changePasswordSchema, PASSWORD_MIN } from '@/shared/auth';
+import { changePasswordSchema } from '@/shared/auth';
 
 const FIELDS = ['currentPassword', 'newPassword', 'confirm'] as const;
 
@@ -62,29 +62,18 @@ export function PasswordCard() {
         autoComplete="current-password"
         secureTextEntry
       />
-      <TextField
-        label="New password"
-        value={newPassword}
-        onChangeText={setNew}
+      <NewPasswordFields
+        password={newPassword}
+        confirm={confirm}
+        onPassword={setNew}
+        onConfirm={setConfirm}
         onSubmit={onSubmit}
-        error={errors.fields.newPassword}
-        hint={`At least ${PASSWORD_MIN} characters.`}
-        autoComplete="new-password"
-        secureTextEntry
-      />
-      <TextField
-        label="New password again"
-        value={confirm}
-        onChangeText={setConfirm}
-        onSubmit={onSubmit}
-        error={errors.fields.confirm}
-        autoComplete="new-password"
-        secureTextEntry
+        errors={{ password: errors.fields.newPassword, confirm: errors.fields.confirm }}
       />
       <Button
-        label={isMutating ? 'Changing…' : 'Change password'}
-        accessibilityLabel="Change password"
-        disabled={isMutating}
+        label="Change password"
+        busyLabel="Changing…"
+        busy={isMutating}
         onPress={onSubmit}
       />
     </Card>

@@ -79,9 +79,10 @@ export function ProfileCard({ user }: { user: User }) {
         autoCapitalize="words"
       />
       <Button
-        label={isMutating ? 'Saving…' : 'Save name'}
-        accessibilityLabel="Save name"
-        disabled={isMutating || !changed}
+        label="Save name"
+        busyLabel="Saving…"
+        busy={isMutating}
+        disabled={!changed}
         onPress={() => void submit()}
       />
     </Card>

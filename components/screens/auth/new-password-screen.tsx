@@ -3,18 +3,17 @@ import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { isDeadLink, LinkChecking, LinkGone } from '@/components/screens/auth/link-states';
-import { MISMATCH } from '@/components/screens/auth/passwords';
+import { MISMATCH, NewPasswordFields } from '@/components/screens/auth/new-password-fields';
 import { HOME_PATH } from '@/components/shell/next-path';
 import { PublicFrame } from '@/components/shell/public-frame';
 import { space } from '@/components/theme/tokens';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
-import { TextField } from '@/components/ui/text-field';
 import { ThemedText } from '@/components/ui/themed-text';
 import { ApiError } from '@/lib/api/fetcher';
 import { checkForm, errorsFromApi, NO_ERRORS, type FormErrors } from '@/lib/api/form-errors';
 import { usePasswordResetToken, useSetNewPassword } from '@/lib/api/use-auth';
-import { newPasswordSchema, PASSWORD_MIN, tokenSchema } from '@/shared/auth';
+import { newPasswordSchema, tokenSchema } from '@/shared/auth';
 
 const FIELDS = ['password', 'confirm'] as const;
 
@@ -70,31 +69,20 @@ export function NewPasswordScreen({ token }: { token: string }) {
           </ThemedText>
         </ThemedText>
         {errors.form ? <Notice kind="error" message={errors.form} testID="form-error" /> : null}
-        <TextField
-          label="New password"
-          value={password}
-          onChangeText={setPassword}
+        <NewPasswordFields
+          password={password}
+          confirm={confirm}
+          onPassword={setPassword}
+          onConfirm={setConfirm}
           onSubmit={() => void submit()}
-          error={errors.fields.password}
-          hint={`At least ${PASSWORD_MIN} characters.`}
-          autoComplete="new-password"
-          secureTextEntry
+          errors={{ password: errors.fields.password, confirm: errors.fields.confirm }}
           autoFocus
         />
-        <TextField
-          label="New password again"
-          value={confirm}
-          onChangeText={setConfirm}
-          onSubmit={() => void submit()}
-          error={errors.fields.confirm}
-          autoComplete="new-password"
-          secureTextEntry
-        />
         <Button
-          label={isMutating ? 'Saving…' : 'Save and sign in'}
-          accessibilityLabel="Save and sign in"
+          label="Save and sign in"
+          busyLabel="Saving…"
+          busy={isMutating}
           variant="primary"
-          disabled={isMutating}
           onPress={() => void submit()}
         />
       </View>

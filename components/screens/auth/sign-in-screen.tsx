@@ -60,10 +60,10 @@ export function SignInScreen({ next }: { next?: string }) {
           secureTextEntry
         />
         <Button
-          label={isMutating ? 'Signing in…' : 'Sign in'}
-          accessibilityLabel="Sign in"
+          label="Sign in"
+          busyLabel="Signing in…"
+          busy={isMutating}
           variant="primary"
-          disabled={isMutating}
           onPress={() => void submit()}
         />
         <TextLink href="/forgot-password" label="Forgot your password?" />

@@ -3,7 +3,7 @@ import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { isDeadLink, LinkChecking, LinkGone } from '@/components/screens/auth/link-states';
-import { MISMATCH } from '@/components/screens/auth/passwords';
+import { MISMATCH, NewPasswordFields } from '@/components/screens/auth/new-password-fields';
 import { HOME_PATH } from '@/components/shell/next-path';
 import { PublicFrame } from '@/components/shell/public-frame';
 import { space } from '@/components/theme/tokens';
@@ -15,7 +15,7 @@ import { ThemedText } from '@/components/ui/themed-text';
 import { ApiError } from '@/lib/api/fetcher';
 import { checkForm, errorsFromApi, NO_ERRORS, type FormErrors } from '@/lib/api/form-errors';
 import { useAcceptInvitation, useInvitationToken } from '@/lib/api/use-auth';
-import { acceptInvitationSchema, PASSWORD_MIN, ROLE_LABELS, tokenSchema } from '@/shared/auth';
+import { acceptInvitationSchema, ROLE_LABELS, tokenSchema } from '@/shared/auth';
 
 const FIELDS = ['name', 'password', 'confirm'] as const;
 
@@ -93,30 +93,20 @@ export function WelcomeScreen({ token }: { token: string }) {
           autoCapitalize="words"
           autoFocus
         />
-        <TextField
+        <NewPasswordFields
           label="Password"
-          value={password}
-          onChangeText={setPassword}
+          password={password}
+          confirm={confirm}
+          onPassword={setPassword}
+          onConfirm={setConfirm}
           onSubmit={() => void submit()}
-          error={errors.fields.password}
-          hint={`At least ${PASSWORD_MIN} characters.`}
-          autoComplete="new-password"
-          secureTextEntry
-        />
-        <TextField
-          label="Password again"
-          value={confirm}
-          onChangeText={setConfirm}
-          onSubmit={() => void submit()}
-          error={errors.fields.confirm}
-          autoComplete="new-password"
-          secureTextEntry
+          errors={{ password: errors.fields.password, confirm: errors.fields.confirm }}
         />
         <Button
-          label={isMutating ? 'Joining…' : 'Join the team'}
-          accessibilityLabel="Join the team"
+          label="Join the team"
+          busyLabel="Joining…"
+          busy={isMutating}
           variant="primary"
-          disabled={isMutating}
           onPress={() => void submit()}
         />
       </View>

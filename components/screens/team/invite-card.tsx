@@ -56,10 +56,10 @@ export function InviteCard() {
       />
       <RoleCheckboxes value={roles} onChange={setRoles} error={errors.fields.roles} />
       <Button
-        label={isMutating ? 'Sending…' : 'Send invitation'}
-        accessibilityLabel="Send invitation"
+        label="Send invitation"
+        busyLabel="Sending…"
+        busy={isMutating}
         variant="primary"
-        disabled={isMutating}
         onPress={() => void submit()}
       />
     </Card>
