@@ -310,6 +310,11 @@ export class Assemblage {
     this.s = Math.sqrt(Math.max(0, this.tab.fixedIonicStrength ?? I));
   }
 
+  /** Ionic strength of the current concentrations, mol/L (whatever the activity coefficients used). */
+  get computedIonicStrength(): number {
+    return this.ionCalc;
+  }
+
   /** Ionic strength, mol/L: the value used for activities, or computed from the species if ideal. */
   get ionicStrength(): number {
     return this.mode === 'ideal' ? this.ionCalc : this.s * this.s;

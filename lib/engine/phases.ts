@@ -4,6 +4,7 @@
 // tried, smallest first, and the first consistent one is taken.
 
 import { DEFAULTS } from './defaults';
+import { illinois } from './illinois';
 import { type Assemblage, assemblageFor, type NewtonOutcome, type TraceLine } from './newton';
 import { type Tableau, zeros } from './tableau';
 
@@ -352,4 +353,52 @@ export function settlePhases(tab: Tableau, opts: { tolerance: number; maxIterati
   }
   const last = loop.attempt(present);
   return finishWith(loop, last.asm, false, 'The set of solids present did not settle within the allowed number of changes.');
+}
+
+/**
+ * Last resort for Davies with the ionic strength computed, when the coupled solve failed: solve
+ * the whole phase problem with I held, and find the I that its solution gives back, first by
+ * successive substitution, then by Illinois false position on g(I) = I(solution at I) - I
+ * (g(0) >= 0, and g < 0 once I passes what the solution can hold). Each held solve is the
+ * well-behaved fixed-I problem, started from the one before. Returns null when it cannot
+ * (a held solve fails, or no bracket is found).
+ */
+export function settleOuterIonicStrength(tab: Tableau, opts: { tolerance: number; maxIterations: number }, start: number): PhaseOutcome | null {
+  let state: WarmStart | undefined;
+  let iterations = 0;
+  const at = (I: number): number => {
+    if (iterations > ITERATION_BUDGET) return NaN;
+    const out = settlePhases({ ...tab, fixedIonicStrength: I }, { ...opts, trace: false }, state);
+    iterations += out.iterations;
+    if (!out.converged) return NaN;
+    state = out.state;
+    return out.asm.computedIonicStrength - I;
+  };
+  const close = (I: number, g: number) => Math.abs(g) <= 10 * opts.tolerance * Math.max(I, 1e-12);
+  let I = Math.max(0, start);
+  let g = at(I);
+  for (let n = 0; n < 8 && Number.isFinite(g) && !close(I, g); n++) {
+    I += g;
+    g = at(I);
+  }
+  if (Number.isNaN(g)) return null;
+  if (!close(I, g)) {
+    const g0 = at(0);
+    if (Number.isNaN(g0)) return null;
+    let hi = Math.max(2 * I, 2 * g0, 1e-6);
+    let ghi = at(hi);
+    for (let n = 0; n < 40 && ghi > 0; n++) {
+      hi *= 2;
+      ghi = at(hi);
+    }
+    if (!(ghi <= 0)) return null;
+    const found = illinois(at, { a: 0, fa: g0, b: hi, fb: ghi }, (x, fx, a, b) => close(x, fx) || Math.abs(b - a) <= 1e-15 * Math.max(a, b));
+    if (Number.isNaN(found.fx)) return null;
+    I = found.x;
+  }
+  // Solve once more at the answer: the pooled work space holds the last solve tried.
+  const final = settlePhases({ ...tab, fixedIonicStrength: I }, { ...opts, trace: false }, state);
+  iterations += final.iterations;
+  if (!final.converged || !close(I, final.asm.computedIonicStrength - I)) return null;
+  return { ...final, iterations };
 }

@@ -4,7 +4,7 @@
 
 import { DEFAULTS, type SolveOptions } from './defaults';
 import type { Assemblage, TraceLine } from './newton';
-import { saturationIndex, settlePhases, type WarmStart } from './phases';
+import { saturationIndex, settleOuterIonicStrength, settlePhases, type WarmStart } from './phases';
 import { compileProblem, type Tableau } from './tableau';
 import type { Problem, SolveResult } from './types';
 
@@ -93,15 +93,16 @@ function resultWarnings(tab: Tableau, body: ReturnType<typeof buildResult>): str
 
 /** Solves a compiled tableau, optionally from the state of a nearby solve. Never throws on non-convergence. */
 export function solveTableau(tab: Tableau, options: SolveOptions = {}, warm?: WarmStart): TableauSolution {
-  const settled = settlePhases(
-    tab,
-    {
-      tolerance: options.tolerance ?? DEFAULTS.tolerance,
-      maxIterations: options.maxIterations ?? DEFAULTS.maxIterations,
-      trace: options.trace === true,
-    },
-    warm,
-  );
+  const opts = {
+    tolerance: options.tolerance ?? DEFAULTS.tolerance,
+    maxIterations: options.maxIterations ?? DEFAULTS.maxIterations,
+    trace: options.trace === true,
+  };
+  let settled = settlePhases(tab, opts, warm);
+  if (!settled.converged && tab.activity === 'davies' && tab.fixedIonicStrength === null) {
+    const outer = settleOuterIonicStrength(tab, opts, settled.state.ionicStrength);
+    if (outer) settled = { ...outer, iterations: outer.iterations + settled.iterations, trace: settled.trace };
+  }
   const body = buildResult(tab, settled.asm, settled.possible);
   const result: SolveResult & { trace?: TraceLine[] } = {
     status: settled.converged ? 'converged' : 'not_converged',
