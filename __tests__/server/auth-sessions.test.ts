@@ -37,6 +37,13 @@ describe('sign-in, sessions and sign-out', () => {
     expect(row?.lastSignInAt).toBeInstanceOf(Date);
   });
 
+  it('marks the cookie Secure when the request came over HTTPS through a proxy on loopback', async () => {
+    const person = await createUser(t.db.db, { roles: ['chemist'] });
+    const res = await t.agent().post('/api/auth/sign-in').set('X-Forwarded-Proto', 'https').send({ email: person.email, password: TEST_PASSWORD });
+    expect(res.status).toBe(200);
+    expect(sessionCookie(res)).toMatch(/; Secure/);
+  });
+
   it('GET /api/me is 401 without a session', async () => {
     const res = await request(t.server).get('/api/me');
     expect(res.status).toBe(401);

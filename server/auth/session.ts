@@ -1,5 +1,5 @@
 import type { RequestHandler, Response } from 'express';
-import type { Session } from 'lucia';
+import type { Cookie, Session } from 'lucia';
 
 import type { AuthLucia } from '@/server/auth/lucia';
 import type { Role, User } from '@/shared/auth';
@@ -15,6 +15,15 @@ declare global {
   }
 }
 
+/**
+ * Sends a session cookie, marked Secure when this request came over HTTPS (directly, or through
+ * a proxy on loopback that says so) even if the app was not told it is served over HTTPS.
+ */
+function sendCookie(res: Response, cookie: Cookie): void {
+  if (res.req.secure) cookie.attributes.secure = true;
+  res.append('Set-Cookie', cookie.serialize());
+}
+
 /** Reads the session cookie, validates it, and puts the person on res.locals (null when none). */
 export function sessionMiddleware(lucia: AuthLucia): RequestHandler {
   return async (req, res, next) => {
@@ -24,16 +33,16 @@ export function sessionMiddleware(lucia: AuthLucia): RequestHandler {
     if (!id) return next();
     const { session, user } = await lucia.validateSession(id);
     if (!session) {
-      res.append('Set-Cookie', lucia.createBlankSessionCookie().serialize());
+      sendCookie(res, lucia.createBlankSessionCookie());
       return next();
     }
     if (!user.active) {
       // Deactivation ends sessions; this catches one that raced with it.
       await lucia.invalidateSession(session.id);
-      res.append('Set-Cookie', lucia.createBlankSessionCookie().serialize());
+      sendCookie(res, lucia.createBlankSessionCookie());
       return next();
     }
-    if (session.fresh) res.append('Set-Cookie', lucia.createSessionCookie(session.id).serialize());
+    if (session.fresh) sendCookie(res, lucia.createSessionCookie(session.id));
     res.locals.session = session;
     res.locals.user = { id: user.id, email: user.email, name: user.name, roles: user.roles as Role[] };
     next();
@@ -45,7 +54,7 @@ export async function startSession(lucia: AuthLucia, res: Response, userId: stri
   const previous = res.locals.session;
   if (previous) await lucia.invalidateSession(previous.id);
   const session = await lucia.createSession(userId, {});
-  res.append('Set-Cookie', lucia.createSessionCookie(session.id).serialize());
+  sendCookie(res, lucia.createSessionCookie(session.id));
   res.locals.session = session;
 }
 
@@ -53,7 +62,7 @@ export async function startSession(lucia: AuthLucia, res: Response, userId: stri
 export async function endSession(lucia: AuthLucia, res: Response): Promise<void> {
   const session = res.locals.session;
   if (session) await lucia.invalidateSession(session.id);
-  res.append('Set-Cookie', lucia.createBlankSessionCookie().serialize());
+  sendCookie(res, lucia.createBlankSessionCookie());
   res.locals.session = null;
   res.locals.user = null;
 }
