@@ -572,7 +572,10 @@ export class Assemblage {
       const t = this.T[k] as number;
       const calc = this.calc[k] as number;
       const log = this.logMisfit(k, false);
-      const d = !Number.isNaN(log) ? Math.abs(log) : this.allPos[k] && t > 0 ? Infinity : Math.abs(calc - t) / Math.max(t, this.absSum[k] as number, 1e-300);
+      // No log form: because a solid takes part (judge linearly), or because nothing is dissolved
+      // or the solids claim the whole total (far from the answer).
+      const far = this.allPos[k] && t > 0 && (!this.hasSolid[k] || this.solidLogForm);
+      const d = !Number.isNaN(log) ? Math.abs(log) : far ? Infinity : Math.abs(calc - t) / Math.max(t, this.absSum[k] as number, 1e-300);
       if (!(d <= worst)) worst = d;
     }
     return worst;
