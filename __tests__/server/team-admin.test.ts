@@ -111,3 +111,23 @@ describe('team administration', () => {
     expect((await t.agent().get('/api/auth/options')).body).toEqual({ outbox: true });
   });
 });
+
+describe('with a real SMTP server configured (no local outbox)', () => {
+  let t: TestServer;
+  beforeAll(async () => {
+    t = await startTestServer({ outbox: false });
+  });
+  afterAll(async () => {
+    await t.close();
+  });
+
+  it('has no outbox, and says so to the screens', async () => {
+    const admin = await createUser(t.db.db, { roles: ['admin'] });
+    const agent = t.agent();
+    await signIn(agent, admin.email);
+    const res = await agent.get('/api/dev/outbox');
+    expect(res.status).toBe(404);
+    expect(res.body.error.message).toMatch(/SMTP_URL/);
+    expect((await agent.get('/api/auth/options')).body).toEqual({ outbox: false });
+  });
+});

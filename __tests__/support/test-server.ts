@@ -27,7 +27,9 @@ export type TestServer = {
 };
 
 /** Starts the app against DATABASE_URL (or `dbUrl`) with a throwaway web build folder. */
-export async function startTestServer(options: { dbUrl?: string; webDir?: string; signInLimits?: SignInLimits } = {}): Promise<TestServer> {
+export async function startTestServer(
+  options: { dbUrl?: string; webDir?: string; signInLimits?: SignInLimits; outbox?: boolean } = {},
+): Promise<TestServer> {
   const url = options.dbUrl ?? process.env.DATABASE_URL;
   if (!url) throw new Error('DATABASE_URL is not set: the server project global setup makes it.');
   const db = createDb(url, { max: 4, connectTimeoutS: 2 });
@@ -42,7 +44,7 @@ export async function startTestServer(options: { dbUrl?: string; webDir?: string
     version: '0.0.0-test',
     webDir,
     mailer,
-    outbox: true,
+    outbox: options.outbox ?? true,
     publicUrl: () => origin,
     ...(options.signInLimits ? { signInLimits: options.signInLimits } : {}),
   });
