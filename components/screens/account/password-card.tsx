@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { StyleSheet } from 'react-native';
 
-import { MISMATCH, NewPasswordFields } from '@/components/screens/auth/new-password-fields';
+import { NewPasswordFields, withConfirm } from '@/components/screens/auth/new-password-fields';
 import { space } from '@/components/theme/tokens';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
@@ -29,10 +29,8 @@ export function PasswordCard() {
   const submit = async () => {
     if (isMutating) return;
     setDone(false);
-    const check = checkForm(changePasswordSchema, { currentPassword, newPassword }, FIELDS);
-    const fields = check.ok ? {} : { ...check.errors.fields };
-    if (newPassword !== confirm) fields.confirm ??= MISMATCH;
-    if (!check.ok || fields.confirm) return setErrors({ fields, form: check.ok ? undefined : check.errors.form });
+    const check = withConfirm(checkForm(changePasswordSchema, { currentPassword, newPassword }, FIELDS), newPassword, confirm);
+    if (!check.ok) return setErrors(check.errors);
     setErrors(NO_ERRORS);
     try {
       await trigger(check.data);

@@ -1,8 +1,18 @@
 import { TextField } from '@/components/ui/text-field';
+import { type FormErrors } from '@/lib/api/form-errors';
 import { PASSWORD_MIN } from '@/shared/auth';
 
 /** Message beside a "password again" field when the two entries differ (checked here, never sent). */
 export const MISMATCH = 'Does not match the password above';
+
+type Checked<T> = { ok: true; data: T } | { ok: false; errors: FormErrors };
+
+/** A form's check (checkForm) with the "password again" comparison added. */
+export function withConfirm<T>(check: Checked<T>, password: string, confirm: string): Checked<T> {
+  if (password === confirm) return check;
+  const errors = check.ok ? { fields: {} } : check.errors;
+  return { ok: false, errors: { ...errors, fields: { confirm: MISMATCH, ...errors.fields } } };
+}
 
 type Props = {
   password: string;

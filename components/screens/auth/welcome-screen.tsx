@@ -2,8 +2,8 @@ import { useRouter } from 'expo-router';
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
-import { isDeadLink, LinkChecking, LinkGone } from '@/components/screens/auth/link-states';
-import { MISMATCH, NewPasswordFields } from '@/components/screens/auth/new-password-fields';
+import { LinkChecking, LinkGone, useDeadLink } from '@/components/screens/auth/link-states';
+import { NewPasswordFields, withConfirm } from '@/components/screens/auth/new-password-fields';
 import { HOME_PATH } from '@/components/shell/next-path';
 import { PublicFrame } from '@/components/shell/public-frame';
 import { space } from '@/components/theme/tokens';
@@ -12,7 +12,6 @@ import { Chip } from '@/components/ui/chip';
 import { Notice } from '@/components/ui/notice';
 import { TextField } from '@/components/ui/text-field';
 import { ThemedText } from '@/components/ui/themed-text';
-import { ApiError } from '@/lib/api/fetcher';
 import { checkForm, errorsFromApi, NO_ERRORS, type FormErrors } from '@/lib/api/form-errors';
 import { useAcceptInvitation, useInvitationToken } from '@/lib/api/use-auth';
 import { acceptInvitationSchema, ROLE_LABELS, tokenSchema } from '@/shared/auth';
@@ -28,16 +27,15 @@ export function WelcomeScreen({ token }: { token: string }) {
   const [password, setPassword] = useState('');
   const [confirm, setConfirm] = useState('');
   const [errors, setErrors] = useState<FormErrors>(NO_ERRORS);
-  // The server's reason when it gave one (used, expired, withdrawn), else a general one.
-  const [gone, setGone] = useState<string | null>(null);
   const { trigger, isMutating } = useAcceptInvitation(token);
 
-  if (!valid || gone !== null || isDeadLink(info.error)) {
-    const reason = gone ?? (info.error?.status === 410 ? info.error.message : null);
+  const link = useDeadLink(valid, info.error);
+
+  if (link.dead) {
     return (
       <LinkGone
         title="This invitation no longer works"
-        body={reason ?? 'It was already used or has expired. Ask an admin of your team to send you a new invitation.'}
+        body={link.reason ?? 'It was already used or has expired. Ask an admin of your team to send you a new invitation.'}
         linkHref="/sign-in"
         linkLabel="Go to sign in"
       />
@@ -48,17 +46,14 @@ export function WelcomeScreen({ token }: { token: string }) {
 
   const submit = async () => {
     if (isMutating) return;
-    const check = checkForm(acceptInvitationSchema, { name, password }, FIELDS);
-    const fields = check.ok ? {} : { ...check.errors.fields };
-    if (password !== confirm) fields.confirm = MISMATCH;
-    if (!check.ok || fields.confirm) return setErrors({ fields });
+    const check = withConfirm(checkForm(acceptInvitationSchema, { name, password }, FIELDS), password, confirm);
+    if (!check.ok) return setErrors(check.errors);
     setErrors(NO_ERRORS);
     try {
       await trigger(check.data);
       router.replace(HOME_PATH);
     } catch (error) {
-      if (error instanceof ApiError && error.status === 410) return setGone(error.message);
-      setErrors(errorsFromApi(error, FIELDS));
+      if (!link.caught(error)) setErrors(errorsFromApi(error, FIELDS));
     }
   };
 
