@@ -43,7 +43,7 @@ export function NavItem({ tab, variant, isFocused = false, onPress, onLongPress,
           backgroundColor: rail ? palette.railHover : palette.surfaceRaised,
         },
         rail && isFocused && { backgroundColor: palette.railActive },
-        focus.visible && [styles.focusRing, { outlineColor: rail ? palette.onRail : palette.primary }],
+        focus.ring(rail ? palette.onRail : palette.primary, -2),
       ]}
     >
       <View
@@ -117,5 +117,4 @@ const styles = StyleSheet.create({
     borderRadius: radius.pill,
   },
   barLabel: { textAlign: 'center' },
-  focusRing: { outlineStyle: 'solid', outlineWidth: 2, outlineOffset: -2 },
 });

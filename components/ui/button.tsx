@@ -59,7 +59,7 @@ export function Button({
             backgroundColor: variant === 'danger' ? palette.dangerSoft : palette.primarySoft,
           },
         disabled && styles.disabled,
-        focus.visible && [styles.focusRing, { outlineColor: ink }],
+        focus.ring(ink),
       ]}
     >
       <ThemedText variant="label" tone={filled ? 'onPrimary' : variant === 'danger' ? 'danger' : 'primary'}>
@@ -78,5 +78,4 @@ const styles = StyleSheet.create({
     borderWidth: 1.5,
   },
   disabled: { opacity: 0.55 },
-  focusRing: { outlineStyle: 'solid', outlineWidth: 2, outlineOffset: 2 },
 });

@@ -49,7 +49,7 @@ export function ToggleChip({ label, checked, onToggle, hint, disabled = false, a
           ? { backgroundColor: palette.primary, borderColor: palette.primary }
           : { backgroundColor: palette.surface, borderColor: palette.border },
         disabled && styles.disabled,
-        focus.visible && [styles.focusRing, { outlineColor: palette.primary }],
+        focus.ring(palette.primary),
       ]}
     >
       <ThemedText variant="label" weight="semibold" tone={checked ? 'onPrimary' : 'textMuted'}>
@@ -69,5 +69,4 @@ const styles = StyleSheet.create({
   },
   toggle: { paddingHorizontal: space.md, paddingVertical: space.xs + space.xxs, minHeight: 36, justifyContent: 'center' },
   disabled: { opacity: 0.55 },
-  focusRing: { outlineStyle: 'solid', outlineWidth: 2, outlineOffset: 2 },
 });

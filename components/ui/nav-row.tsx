@@ -23,8 +23,7 @@ export function NavRow({ href, title, body }: Props) {
         style={StyleSheet.flatten<ViewStyle>([
           styles.row,
           { borderColor: palette.border, backgroundColor: palette.surfaceRaised },
-          focus.visible && styles.focusRing,
-          focus.visible && { outlineColor: palette.primary },
+          focus.ring(palette.primary),
         ])}
       >
         <View style={styles.words}>
@@ -54,5 +53,4 @@ const styles = StyleSheet.create({
     borderWidth: 1,
   },
   words: { flex: 1, gap: space.xxs },
-  focusRing: { outlineStyle: 'solid', outlineWidth: 2, outlineOffset: 2 },
 });

@@ -28,8 +28,7 @@ export function TextLink({ href, label, variant = 'label', replace, hint, access
         onBlur={focus.onBlur}
         style={StyleSheet.flatten<ViewStyle>([
           styles.link,
-          focus.visible && styles.focusRing,
-          focus.visible && { outlineColor: palette.primary },
+          focus.ring(palette.primary),
         ])}
       >
         <ThemedText variant={variant} tone="primary" style={styles.text}>
@@ -43,5 +42,4 @@ export function TextLink({ href, label, variant = 'label', replace, hint, access
 const styles = StyleSheet.create({
   link: { alignSelf: 'flex-start', borderRadius: 2 },
   text: { textDecorationLine: 'underline' },
-  focusRing: { outlineStyle: 'solid', outlineWidth: 2, outlineOffset: 2 },
 });

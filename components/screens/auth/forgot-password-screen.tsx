@@ -49,10 +49,10 @@ export function ForgotPasswordScreen() {
           autoFocus
         />
         <Button
-          label={isMutating ? 'Sending…' : sent ? 'Send the link again' : 'Send the link'}
-          accessibilityLabel={sent ? 'Send the link again' : 'Send the link'}
+          label={sent ? 'Send the link again' : 'Send the link'}
+          busyLabel="Sending…"
+          busy={isMutating}
           variant="primary"
-          disabled={isMutating}
           onPress={() => void submit()}
         />
         <TextLink href="/sign-in" label="Back to sign in" />

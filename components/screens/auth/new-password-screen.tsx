@@ -16,7 +16,6 @@ import { newPasswordSchema, tokenSchema } from '@/shared/auth';
 
 const FIELDS = ['password', 'confirm'] as const;
 
-
 /** Chooses a new password through a mailed reset link; on success the person is signed in and goes home. */
 export function NewPasswordScreen({ token }: { token: string }) {
   const valid = tokenSchema.safeParse(token).success;

@@ -27,8 +27,8 @@ export function NotFoundScreen() {
             onBlur={focus.onBlur}
             style={StyleSheet.flatten([
               styles.link,
-              { backgroundColor: palette.primary, outlineColor: palette.text },
-              focus.visible && styles.focusRing,
+              { backgroundColor: palette.primary },
+              focus.ring(palette.text),
             ])}
           >
             <ThemedText variant="label" tone="onPrimary">
@@ -47,5 +47,4 @@ const styles = StyleSheet.create({
     paddingVertical: space.sm + space.xxs,
     borderRadius: radius.md,
   },
-  focusRing: { outlineStyle: 'solid', outlineWidth: 2, outlineOffset: 2 },
 });

@@ -35,7 +35,7 @@ function MessageItem({ message, selected, onPress }: { message: OutboxMessage; s
       style={[
         styles.item,
         { borderColor: selected ? palette.primary : palette.border, backgroundColor: selected ? palette.primarySoft : palette.surface },
-        focus.visible && [styles.focusRing, { outlineColor: palette.primary }],
+        focus.ring(palette.primary),
       ]}
     >
       <ThemedText variant="label">{message.subject}</ThemedText>
@@ -139,5 +139,4 @@ const styles = StyleSheet.create({
   detailPane: { flex: 1, minWidth: 0 },
   item: { gap: space.xxs, padding: space.md, borderRadius: radius.md, borderWidth: 1 },
   message: { gap: space.xs },
-  focusRing: { outlineStyle: 'solid', outlineWidth: 2, outlineOffset: 2 },
 });

@@ -20,7 +20,7 @@ function RoleBox({ role, checked, onToggle }: { role: Role; checked: boolean; on
       onPress={onToggle}
       onFocus={focus.onFocus}
       onBlur={focus.onBlur}
-      style={[styles.row, focus.visible && [styles.focusRing, { outlineColor: palette.primary }]]}
+      style={[styles.row, focus.ring(palette.primary)]}
     >
       <View
         style={[
@@ -80,5 +80,4 @@ const styles = StyleSheet.create({
     justifyContent: 'center',
   },
   words: { flex: 1, gap: space.xxs },
-  focusRing: { outlineStyle: 'solid', outlineWidth: 2, outlineOffset: 2 },
 });
