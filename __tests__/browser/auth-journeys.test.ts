@@ -1,23 +1,18 @@
 // Sign-in, invitations and password reset as people use them, in Chromium at phone and wide
 // sizes, against the real server and its local mail server (read through the outbox).
-import type { Browser, BrowserContext, Page } from 'playwright-core';
+import type { BrowserContext, Page } from 'playwright-core';
 
-import { launchChromium, overflowsSideways, shoot, signInByApi, VIEWPORTS, watchPage } from '@/__tests__/support/browser';
+import { overflowsSideways, shoot, signInByApi, useChromium, VIEWPORTS, watchPage } from '@/__tests__/support/browser';
+import { linkPath } from '@/__tests__/support/mail-links';
 
 const BASE = process.env.LIGANDRY_BROWSER_URL as string;
 
 jest.setTimeout(120_000);
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = useChromium();
 
 async function newPage(viewport: { width: number; height: number }): Promise<{ context: BrowserContext; page: Page }> {
-  const context = await browser.newContext({ viewport: { width: viewport.width, height: viewport.height } });
+  const context = await browser().newContext({ viewport: { width: viewport.width, height: viewport.height } });
   return { context, page: await context.newPage() };
 }
 
@@ -31,12 +26,6 @@ async function mailTo(admin: BrowserContext, to: string, subject: RegExp): Promi
     await new Promise((r) => setTimeout(r, 100));
   }
   throw new Error(`no mail to ${to}`);
-}
-
-function linkIn(text: string, route: string): string {
-  const m = new RegExp(`https?://\\S+(${route}[A-Za-z0-9_-]+)`).exec(text);
-  if (!m) throw new Error(`no ${route} link in:\n${text}`);
-  return m[1] as string;
 }
 
 describe.each(VIEWPORTS)('signing in at $name size', (viewport) => {
@@ -98,7 +87,7 @@ describe('an admin invites a newcomer, who joins through the mailed link and lat
     await page.getByText(`To ${email}`).first().click();
     await page.getByText(/\/welcome\//).first().waitFor();
     await shoot(page, 'wide-outbox-invitation');
-    const welcome = linkIn(await mailTo(admin, email, /invited you/), '/welcome/');
+    const welcome = linkPath(await mailTo(admin, email, /invited you/), '/welcome/');
 
     // The newcomer, on a phone, not signed in.
     const { context: phone, page: p } = await newPage({ width: 390, height: 844 });
@@ -130,7 +119,7 @@ describe('an admin invites a newcomer, who joins through the mailed link and lat
     await p.getByLabel('E-mail').fill(email);
     await p.getByRole('button', { name: 'Send the link' }).click();
     await p.getByText(/If an account exists for that address/).waitFor();
-    const reset = linkIn(await mailTo(admin, email, /new Ligandry password/), '/new-password/');
+    const reset = linkPath(await mailTo(admin, email, /new Ligandry password/), '/new-password/');
     await p.goto(`${BASE}${reset}`, { waitUntil: 'networkidle' });
     await p.getByLabel('New password', { exact: true }).fill('anodes and racks 9');
     await p.getByLabel('New password again').fill('anodes and racks 9');

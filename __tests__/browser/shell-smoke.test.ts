@@ -1,6 +1,4 @@
-import type { Browser } from 'playwright-core';
-
-import { launchChromium, shoot, signInByApi, VIEWPORTS, watchPage } from '@/__tests__/support/browser';
+import { shoot, signInByApi, useChromium, VIEWPORTS, watchPage } from '@/__tests__/support/browser';
 
 const BASE = process.env.LIGANDRY_BROWSER_URL as string;
 const TABS = [
@@ -13,17 +11,11 @@ const TABS = [
 
 jest.setTimeout(120_000);
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchChromium();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = useChromium();
 
 describe.each(VIEWPORTS)('app shell at $name size ($width x $height)', (viewport) => {
   it('renders every tab with the bundled font, no console errors and no outside requests', async () => {
-    const context = await browser.newContext({ viewport: { width: viewport.width, height: viewport.height } });
+    const context = await browser().newContext({ viewport: { width: viewport.width, height: viewport.height } });
     await signInByApi(context, BASE, 'chemist@ligandry.test');
     const page = await context.newPage();
     const seen = watchPage(page);
@@ -73,7 +65,7 @@ describe.each(VIEWPORTS)('app shell at $name size ($width x $height)', (viewport
   });
 
   it('moves between sections by keyboard alone, and each screen has one h1 naming it', async () => {
-    const context = await browser.newContext({ viewport: { width: viewport.width, height: viewport.height } });
+    const context = await browser().newContext({ viewport: { width: viewport.width, height: viewport.height } });
     await signInByApi(context, BASE, 'chemist@ligandry.test');
     const page = await context.newPage();
     await page.goto(`${BASE}/baths`, { waitUntil: 'networkidle' });
@@ -90,7 +82,7 @@ describe.each(VIEWPORTS)('app shell at $name size ($width x $height)', (viewport
   });
 
   it('follows the dark colour scheme', async () => {
-    const context = await browser.newContext({
+    const context = await browser().newContext({
       viewport: { width: viewport.width, height: viewport.height },
       colorScheme: 'dark',
     });

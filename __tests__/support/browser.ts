@@ -13,6 +13,24 @@ export const VIEWPORTS = [
   { name: 'wide', width: 1280, height: 800 },
 ] as const;
 
+/**
+ * One Chromium for a test file: launched before its tests and closed after them; call at the top
+ * level of the file and use the returned getter inside tests.
+ */
+export function useChromium(): () => Browser {
+  let browser: Browser | undefined;
+  beforeAll(async () => {
+    browser = await launchChromium();
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+  return () => {
+    if (!browser) throw new Error('Chromium is not running: useChromium() must be called at the top level of the test file.');
+    return browser;
+  };
+}
+
 /** Launches headless Chromium from /usr/bin/chromium (never a downloaded browser). */
 export function launchChromium(): Promise<Browser> {
   return chromium.launch({

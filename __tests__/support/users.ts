@@ -9,6 +9,8 @@ import { outboxMessages, users } from '@/db/schema';
 import { hashPassword } from '@/server/auth/passwords';
 import type { Role } from '@/shared/auth';
 
+export { linkPath } from './mail-links';
+
 export const TEST_PASSWORD = 'correct horse battery';
 
 const hashes = new Map<string, Promise<string>>();
@@ -66,11 +68,4 @@ export async function waitForMail(db: Db, to: string, subject: RegExp, timeoutMs
 export async function mailCount(db: Db, to: string): Promise<number> {
   const rows = await db.select({ id: outboxMessages.id }).from(outboxMessages).where(sql`${to} = any(${outboxMessages.envelopeTo})`);
   return rows.length;
-}
-
-/** The path of the first link in a mail's text that goes to `route` (e.g. "/welcome/"). */
-export function linkPath(text: string, route: string): string {
-  const m = new RegExp(`https?://[^\\s/]+(${route}[A-Za-z0-9_-]+)`).exec(text);
-  if (!m) throw new Error(`no ${route} link in mail:\n${text}`);
-  return m[1] as string;
 }

@@ -142,6 +142,8 @@ export class Assemblage {
   private readonly saveN: Float64Array;
   /** Per present solid, the unknown whose ln x its solubility product sets (projection), or -1. */
   private readonly pivot: Int32Array;
+  /** 1 where an unknown is already some solid's pivot (scratch for choosePivots). */
+  private readonly pivotTaken: Uint8Array;
   private pivotsReady = false;
   private readonly pm: Float64Array;
   private readonly prhs: Float64Array;
@@ -193,6 +195,7 @@ export class Assemblage {
     this.saveLnx = new Float64Array(nc);
     this.saveN = new Float64Array(nsol);
     this.pivot = new Int32Array(nsol);
+    this.pivotTaken = new Uint8Array(nc);
     this.pm = new Float64Array(nsol * nsol);
     this.prhs = new Float64Array(nsol);
   }
@@ -588,8 +591,8 @@ export class Assemblage {
    */
   private choosePivots(): boolean {
     const { m, p, bu, pivot } = this;
-    const taken = this.saveLnx; // scratch: 1 where a column is chosen
-    for (let k = 0; k < m; k++) taken[k] = 0;
+    const taken = this.pivotTaken;
+    taken.fill(0);
     for (let r = 0; r < p; r++) {
       let best = -1;
       let bestLimit = Infinity;

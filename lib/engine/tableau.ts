@@ -69,13 +69,10 @@ function describe(value: unknown): string {
   return typeof value;
 }
 
-/**
- * Component names in order; positions are looked up with indexOf: lists are short (a handful of
- * components), and a scan of them is quicker than hashing into a Map on every solve.
- */
-type ComponentIndex = readonly string[];
+// Component positions are looked up with indexOf on the names: lists are short (a handful of
+// components), and a scan of them is quicker than hashing into a Map on every solve.
 
-function readComponents(problem: Obj): { components: string[]; index: ComponentIndex } {
+function readComponents(problem: Obj): string[] {
   const list = problem.components;
   if (!Array.isArray(list) || list.length === 0) {
     throw new EngineInputError('components', 'give a non-empty list of component names such as ["Ag+", "CN-", "H+"]');
@@ -87,17 +84,17 @@ function readComponents(problem: Obj): { components: string[]; index: ComponentI
     }
     if (list.indexOf(name) < i) throw new EngineInputError(`components[${i}]`, `duplicate component "${name}"`);
   }
-  return { components: list as string[], index: list as string[] };
+  return list as string[];
 }
 
 /** Reads totals (mol/L, at least 0) or fixed free concentrations (above 0) into `into`; marks `seen`. */
-function readAmounts(problem: Obj, key: 'totals' | 'fixed', index: ComponentIndex, into: number[], seen: number[]): void {
+function readAmounts(problem: Obj, key: 'totals' | 'fixed', components: readonly string[], into: number[], seen: number[]): void {
   const raw = problem[key];
   if (raw === undefined) return;
   if (!isObject(raw)) throw new EngineInputError(key, 'must be an object of component name to mol/L');
   for (const name in raw) {
     const value = raw[name];
-    const j = index.indexOf(name);
+    const j = components.indexOf(name);
     const v = typeof value === 'number' && Number.isFinite(value) ? value : NaN;
     if (j < 0 || !(key === 'totals' ? v >= 0 : v > 0)) {
       const field = `${key}.${name}`;
@@ -119,7 +116,7 @@ interface Reaction {
 }
 
 interface ReadContext {
-  index: ComponentIndex;
+  components: readonly string[];
   nc: number;
   temperatureC: number;
   stale: string[];
@@ -140,7 +137,7 @@ function readStoich(raw: unknown, list: 'species' | 'solids', i: number, ctx: Re
   const row = zeros(ctx.nc);
   let any = false;
   for (const name in raw) {
-    const j = ctx.index.indexOf(name);
+    const j = ctx.components.indexOf(name);
     if (j < 0) {
       throw new EngineInputError(`${entryPath(list, i)}.stoich.${name}`, `unknown component "${name}"; add it to components or fix the name`);
     }
@@ -215,15 +212,15 @@ function hasFreeComponent(row: readonly number[], fixed: readonly number[]): boo
 /** Checks a problem and compiles it; throws EngineInputError naming the field at fault. */
 export function compileProblem(input: Problem | unknown): Tableau {
   if (!isObject(input)) throw new EngineInputError('problem', 'must be a JSON object with components, totals, species and solids');
-  const { components, index } = readComponents(input);
+  const components = readComponents(input);
   const nc = components.length;
   const total = zeros(nc);
   const fixedValue = zeros(nc);
   const fixedLn = zeros(nc);
   const hasTotal = zeros(nc);
   const fixed = zeros(nc);
-  readAmounts(input, 'totals', index, total, hasTotal);
-  readAmounts(input, 'fixed', index, fixedValue, fixed);
+  readAmounts(input, 'totals', components, total, hasTotal);
+  readAmounts(input, 'fixed', components, fixedValue, fixed);
   for (let j = 0; j < nc; j++) if (fixed[j]) fixedLn[j] = Math.log(fixedValue[j] as number);
   for (let j = 0; j < nc; j++) {
     const name = components[j] as string;
@@ -232,13 +229,13 @@ export function compileProblem(input: Problem | unknown): Tableau {
   }
   const temperatureC = readTemperature(input);
   const activity = readActivity(input);
-  const ctx: ReadContext = { index, nc, temperatureC, stale: [] };
+  const ctx: ReadContext = { components, nc, temperatureC, stale: [] };
 
   const rawSpecies = readList(input, 'species');
   const species: Reaction[] = [];
   for (let i = 0; i < rawSpecies.length; i++) {
     const r = readReaction(rawSpecies[i], 'species', i, ctx);
-    if (index.indexOf(r.name) >= 0 || occursBefore(species, r.name, i)) {
+    if (components.indexOf(r.name) >= 0 || occursBefore(species, r.name, i)) {
       throw new EngineInputError(`species[${i}].name`, `duplicate name "${r.name}" (components and species share one list of names)`);
     }
     species.push(r);

@@ -10,7 +10,7 @@ import { endSession, startSession } from '@/server/auth/session';
 import { hashToken, newId, newToken } from '@/server/auth/tokens';
 import { writeAudit } from '@/server/audit';
 import { HttpError } from '@/server/http-error';
-import { resetMail } from '@/server/mail/messages';
+import { dateText, resetMail } from '@/server/mail/messages';
 import {
   acceptInvitationSchema,
   changePasswordSchema,
@@ -40,21 +40,17 @@ function tokenParam(req: Request, what: 'invitation' | 'password link'): string 
   return parsed.data;
 }
 
-function when(d: Date): string {
-  return d.toISOString().slice(0, 16).replace('T', ' ') + ' UTC';
-}
-
 /** Why a stored invitation can no longer be used, or null if it can. */
 function invitationProblem(row: { acceptedAt: Date | null; revokedAt: Date | null; expiresAt: Date }, now = new Date()): string | null {
   if (row.acceptedAt) return 'This invitation has already been used. Sign in, or ask an admin for a new invitation.';
   if (row.revokedAt) return 'This invitation was withdrawn or replaced by a newer one. Use the latest mail, or ask an admin for a new invitation.';
-  if (row.expiresAt <= now) return `This invitation expired on ${when(row.expiresAt)}. Ask an admin to send a new one.`;
+  if (row.expiresAt <= now) return `This invitation expired on ${dateText(row.expiresAt)}. Ask an admin to send a new one.`;
   return null;
 }
 
 function resetProblem(row: { usedAt: Date | null; expiresAt: Date }, now = new Date()): string | null {
   if (row.usedAt) return 'This link has already been used or was replaced by a newer one. Ask for a new link.';
-  if (row.expiresAt <= now) return `This link expired at ${when(row.expiresAt)}. Ask for a new link.`;
+  if (row.expiresAt <= now) return `This link expired at ${dateText(row.expiresAt)}. Ask for a new link.`;
   return null;
 }
 

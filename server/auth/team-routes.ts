@@ -189,9 +189,9 @@ export function teamRouter(ctx: AuthContext): Router {
     res.status(204).end();
   });
 
+  const actor = alias(users, 'actor');
   router.get('/team/audit', admin, async (req, res) => {
     const q = auditQuery.parse(req.query);
-    const actor = alias(users, 'actor');
     const rows = await db
       .select({
         id: auditLog.id,

@@ -4,7 +4,8 @@ import type { MailMessage } from './mailer';
 
 const SIGNATURE = '\n\n-- \nLigandry\nThis message was sent automatically; replies are not read.';
 
-function dateText(d: Date): string {
+/** A moment as people read it in mail and messages: 2026-12-09 01:30 UTC. */
+export function dateText(d: Date): string {
   return d.toISOString().slice(0, 16).replace('T', ' ') + ' UTC';
 }
 
