@@ -698,12 +698,14 @@ export class Assemblage {
       const sat = this.saturationResidual();
       const ion = this.ionResidual();
       const satOk = sat <= SATURATION_TOLERANCE;
+      // Within ten times the tolerances: accepted when round-off stops progress short of them.
+      const nearly = res <= loose && ion <= loose && sat <= SATURATION_TOLERANCE * 100;
       if (res <= tolerance && satOk && ion <= tolerance) return { converged: true, singular: false, iterations: it, residual: res };
       const score = Math.max(res, ion, sat * 1e-2);
       if (score < best * 0.5) {
         best = score;
         stalled = 0;
-      } else if (++stalled >= 4 && res <= loose && ion <= loose && sat <= SATURATION_TOLERANCE * 100) {
+      } else if (++stalled >= 4 && nearly) {
         return { converged: true, singular: false, iterations: it, residual: res };
       }
       if (it === maxIterations) return { converged: false, singular: false, iterations: it, residual: res };
@@ -751,10 +753,8 @@ export class Assemblage {
         for (let r = 0; r < this.p; r++) this.n[r] = this.saveN[r] as number;
         this.s = s0;
         this.evaluate();
-        // Round-off can leave no descent just short of the tolerance: accept ten times it then.
-        const left = this.massResidual();
-        const close = left <= loose && this.ionResidual() <= loose && this.saturationResidual() <= SATURATION_TOLERANCE * 100;
-        return { converged: close, singular: false, iterations: it + 1, residual: left };
+        // Back at this iteration's start: round-off may have left no descent just short of the tolerance.
+        return { converged: nearly, singular: false, iterations: it + 1, residual: res };
       }
       this.trace?.push({ iteration: this.trace.length + 1, residual: res, step: lambda * biggest, solids: this.presentList().map((s) => this.tab.solidNames[s] as string) });
     }
