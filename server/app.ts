@@ -14,6 +14,8 @@ import type { Mailer } from '@/server/mail/mailer';
 import { outboxRouter } from '@/server/mail/outbox-routes';
 import { apiNotFound, errorHandler } from '@/server/middleware/error-handler';
 import { originCheck } from '@/server/middleware/origin-check';
+import { libraryRouter } from '@/server/library/routes';
+import { runsRouter } from '@/server/library/runs-routes';
 import { healthRouter } from '@/server/routes/health';
 import { webRouter } from '@/server/static';
 
@@ -112,6 +114,8 @@ export function createApp(options: AppOptions): Express {
   api.use(authRouter(auth));
   api.use(teamRouter(auth));
   api.use(outboxRouter(auth));
+  api.use(libraryRouter(auth));
+  api.use(runsRouter(auth));
   api.use(apiNotFound);
   app.use('/api', api);
 

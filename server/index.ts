@@ -1,8 +1,7 @@
 import type { Server } from 'node:http';
 
 import { createDb } from '@/db/client';
-import { runMigrations } from '@/db/migrate';
-import { describePrepare, prepareDemoDatabase } from '@/db/prepare';
+import { describePrepare, prepareDatabase, prepareDemoDatabase } from '@/db/prepare';
 import { createApp } from '@/server/app';
 import { startFakeSmtp, type FakeSmtp } from '@/server/mail/fake-smtp';
 import { createMailer, type Mailer } from '@/server/mail/mailer';
@@ -50,7 +49,7 @@ async function main(): Promise<void> {
     if (env.SEED_DEMO) {
       process.stdout.write(describePrepare(await prepareDemoDatabase(env.DATABASE_URL)));
     } else {
-      await runMigrations(env.DATABASE_URL);
+      process.stdout.write(describePrepare(await prepareDatabase(env.DATABASE_URL, { demo: false })));
     }
   } catch (err) {
     fail(describeDbFailure(err, env.DATABASE_URL));

@@ -8,6 +8,7 @@ import type { Express } from 'express';
 import request from 'supertest';
 
 import { createDb, type DbHandle } from '@/db/client';
+import { seedLibrary } from '@/db/seed/library';
 import { createApp } from '@/server/app';
 import type { SignInLimits } from '@/server/auth/context';
 import { createLogger } from '@/server/logger';
@@ -35,6 +36,8 @@ export async function startTestServer(
   const db = createDb(url, { max: 4, connectTimeoutS: 2 });
   const ownWebDir = !options.webDir;
   const webDir = options.webDir ?? fs.mkdtempSync(path.join(os.tmpdir(), 'ligandry-web-'));
+  // The starting constants library, as every start loads it (once per database).
+  await seedLibrary(db.db);
   const smtp = await startFakeSmtp(db.db);
   const mailer = createMailer(smtp.url, 'Ligandry test <no-reply@ligandry.test>');
   let origin = '';

@@ -1,3 +1,4 @@
 // Every table of the product, split by domain; drizzle-kit reads this file.
 export * from './audit';
 export * from './auth';
+export * from './library';

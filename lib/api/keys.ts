@@ -19,4 +19,26 @@ export const keys = {
   audit: (limit: number, before?: number | null) =>
     before == null ? `/api/team/audit?limit=${limit}` : `/api/team/audit?limit=${limit}&before=${before}`,
   outbox: '/api/dev/outbox',
+  species: '/api/species',
+  /** The library list (and its CSV export) for a filter; parameters left out when empty. */
+  constants: (query: Record<string, string | undefined> = {}) => withQuery('/api/constants', query),
+  constantsCsv: (query: Record<string, string | undefined> = {}) => withQuery('/api/constants/export.csv', query),
+  constant: (id: number) => `/api/constants/${id}`,
+  constantRevisions: (id: number) => `/api/constants/${id}/revisions`,
+  constantReview: (id: number) => `/api/constants/${id}/review`,
+  constantRetire: (id: number) => `/api/constants/${id}/retire`,
+  constantsImport: '/api/constants/import',
+  proposals: '/api/constants',
+  buildSystem: '/api/systems/build',
+  runs: '/api/runs',
+  run: (id: string) => `/api/runs/${encodeURIComponent(id)}`,
 } as const;
+
+/** A path with the non-empty query parameters in a stable order (so SWR keys match). */
+function withQuery(path: string, query: Record<string, string | undefined>): string {
+  const parts = Object.keys(query)
+    .sort()
+    .filter((k) => query[k] !== undefined && query[k] !== '')
+    .map((k) => `${encodeURIComponent(k)}=${encodeURIComponent(query[k] as string)}`);
+  return parts.length === 0 ? path : `${path}?${parts.join('&')}`;
+}

@@ -6,4 +6,5 @@ export type { WarmStart } from './phases';
 export { solve, solveTableau, type TableauSolution } from './solve';
 export { compileProblem, retarget, type Tableau } from './tableau';
 export { daviesA, vantHoff } from './temperature';
+export { ENGINE_VERSION } from './version';
 export type * from './types';

@@ -2,7 +2,7 @@ import { ROLE_LABELS, type Role } from '@/shared/auth';
 
 import type { MailMessage } from './mailer';
 
-const SIGNATURE = '\n\n-- \nLigandry\nThis message was sent automatically; replies are not read.';
+export const SIGNATURE = '\n\n-- \nLigandry\nThis message was sent automatically; replies are not read.';
 
 /** A moment as people read it in mail and messages: 2026-12-09 01:30 UTC. */
 export function dateText(d: Date): string {
