@@ -31,6 +31,19 @@ const MATRIX: Record<string, Rule> = {
   'DELETE /api/team/invitations/:id': ['admin'],
   'GET /api/team/audit': ['admin'],
   'GET /api/dev/outbox': ['admin'],
+  'GET /api/species': 'signed-in',
+  'GET /api/constants': 'signed-in',
+  'GET /api/constants/export.csv': 'signed-in',
+  'GET /api/constants/:id': 'signed-in',
+  'POST /api/constants': ['chemist'],
+  'POST /api/constants/:id/revisions': ['chemist'],
+  'POST /api/constants/:id/review': ['reviewer'],
+  'POST /api/constants/:id/retire': ['reviewer'],
+  'POST /api/constants/import': ['chemist'],
+  'POST /api/systems/build': 'signed-in',
+  'POST /api/runs': ['chemist', 'technician'],
+  'GET /api/runs': 'signed-in',
+  'GET /api/runs/:id': 'signed-in',
 };
 
 function ruleOf(access: Access | null): Rule | null {
