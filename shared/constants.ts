@@ -86,9 +86,14 @@ export const constantSummarySchema = z.object({
   status: z.enum(CONSTANT_STATUSES),
   proposedBy: personRefSchema.nullable(),
   proposedAt: z.string(),
+  /** The approval or rejection (reviewer null for the starting library, which was reviewed before loading). */
   reviewedBy: personRefSchema.nullable(),
   reviewedAt: z.string().nullable(),
   reviewNote: z.string().nullable(),
+  /** Retirement: by a reviewer, or on approval of the revision that replaced it. */
+  retiredBy: personRefSchema.nullable(),
+  retiredAt: z.string().nullable(),
+  retireNote: z.string().nullable(),
 });
 export type ConstantSummary = z.infer<typeof constantSummarySchema>;
 export const constantListSchema = z.array(constantSummarySchema);

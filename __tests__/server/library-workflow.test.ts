@@ -203,7 +203,7 @@ describe('revisions, versions and runs', () => {
     const row = await approvedDefining('NiI+');
     expect((await chemist.post(`/api/constants/${row.id}/retire`).send({ note: 'no' })).status).toBe(403);
     const res = await reviewer.post(`/api/constants/${row.id}/retire`).send({ note: 'Test value only.' });
-    expect(res.body).toMatchObject({ status: 'retired', reviewNote: 'Test value only.' });
+    expect(res.body).toMatchObject({ status: 'retired', reviewNote: 'Matches the table.', retireNote: 'Test value only.', retiredBy: { name: 'Osei Brandt' } });
     expect((await reviewer.post(`/api/constants/${row.id}/retire`).send({ note: 'again' })).status).toBe(409);
   });
 });

@@ -69,6 +69,7 @@ export async function seedLibrary(db: Db): Promise<LibrarySeedResult> {
         status: 'approved',
         proposedBy: null,
         reviewNote: SEED_REVIEW_NOTE,
+        reviewedAt: new Date(),
       });
       keys.add(checked.key);
       constantsAdded++;

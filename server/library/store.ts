@@ -82,6 +82,7 @@ export async function insertVersion(
     replacesId?: number | null;
     proposedBy: string | null;
     reviewNote?: string | null;
+    reviewedAt?: Date | null;
   },
 ): Promise<ConstantRow> {
   const speciesRows = await ensureSpecies(
@@ -110,6 +111,7 @@ export async function insertVersion(
       status: v.status,
       proposedBy: v.proposedBy,
       reviewNote: v.reviewNote ?? null,
+      reviewedAt: v.reviewedAt ?? null,
     })
     .returning();
   if (!row) throw new Error('constant not stored');
@@ -245,9 +247,12 @@ export function summaries(snap: LibrarySnapshot): ConstantSummary[] {
       status: r.status as ConstantStatus,
       proposedBy: person(snap.names, r.proposedBy),
       proposedAt: r.proposedAt.toISOString(),
-      reviewedBy: person(snap.names, r.reviewedBy ?? r.retiredBy),
-      reviewedAt: (r.reviewedAt ?? r.retiredAt)?.toISOString() ?? null,
-      reviewNote: r.retireNote ?? r.reviewNote,
+      reviewedBy: person(snap.names, r.reviewedBy),
+      reviewedAt: r.reviewedAt?.toISOString() ?? null,
+      reviewNote: r.reviewNote,
+      retiredBy: person(snap.names, r.retiredBy),
+      retiredAt: r.retiredAt?.toISOString() ?? null,
+      retireNote: r.retireNote,
     };
   });
 }
@@ -288,7 +293,8 @@ export function filterSummaries(all: ConstantSummary[], query: Required<Pick<Con
       case 'defines':
         return c.defines.toLowerCase();
       default:
-        return c.reaction.toLowerCase();
+        // By the first species, not by a leading coefficient ("2 Cu+2 + ..." sorts under Cu).
+        return c.reaction.replace(/^\d+(?:\.\d+)?\s+/, '').toLowerCase();
     }
   };
   return out.sort((a, b) => {
