@@ -46,6 +46,8 @@ export const DEFAULT_ROUTES: Routes = {
   '/api/health': { status: 200, body: healthyReply },
   '/api/me': { status: 200, body: chemist },
   '/api/auth/options': { status: 200, body: { outbox: false } },
+  // The library's opening view, empty.
+  '/api/constants?dir=asc&sort=reaction&status=approved': { status: 200, body: [] },
 };
 
 /** Mocks fetch with answers per route; anything unlisted answers 404 not_found. Returns the mock to inspect calls. */

@@ -1,4 +1,4 @@
 import { LibraryScreen } from '@/components/screens/library/library-screen';
 
-/** /library: the Library section's landing screen. */
+/** /library: the constants library, searchable and filterable. */
 export default LibraryScreen;
