@@ -3,17 +3,20 @@ import { StyleSheet, View } from 'react-native';
 import { CALCULATORS } from '@/components/screens/calculate/calculators';
 import { space } from '@/components/theme/tokens';
 import { Card } from '@/components/ui/card';
+import { NavRow } from '@/components/ui/nav-row';
 import { ScreenContainer } from '@/components/ui/screen-container';
 import { StatusPill } from '@/components/ui/status-dot';
+import { TextLink } from '@/components/ui/text-link';
 import { ThemedText } from '@/components/ui/themed-text';
 
-/** Calculate section: lists the planned calculators, each honestly marked as not yet available. */
+/** Calculate section: the calculators that run (with a link), the planned ones marked as not yet available, and saved runs. */
 export function CalculateScreen() {
   return (
     <ScreenContainer
       title="Calculate"
-      subtitle="Equilibrium tools for solutions that hold metals as complex ions. None of them run in this build yet."
+      subtitle="Equilibrium tools for solutions that hold metals as complex ions. Speciation runs in this build; the others are planned."
     >
+      <NavRow href="/calculate/runs" title="Saved runs" body="Calculations kept with the constant versions they used." />
       <View style={styles.grid}>
         {CALCULATORS.map((calc) => (
           <Card key={calc.key} style={styles.card} testID={`calculator-${calc.key}`}>
@@ -23,7 +26,11 @@ export function CalculateScreen() {
             <ThemedText variant="label" weight="regular" tone="textMuted" style={styles.description}>
               {calc.description}
             </ThemedText>
-            <StatusPill kind="unknown" label="Not available yet" />
+            {calc.href ? (
+              <TextLink href={calc.href} label={`Open ${calc.name.toLowerCase()}`} accessibilityLabel={`Open ${calc.name}`} />
+            ) : (
+              <StatusPill kind="unknown" label="Not available yet" />
+            )}
           </Card>
         ))}
       </View>

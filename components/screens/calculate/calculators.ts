@@ -1,5 +1,7 @@
-/** One planned calculator: its name and a plain description of the question it answers. */
-export type CalculatorSpec = { key: string; name: string; description: string };
+import { type Href } from 'expo-router';
+
+/** One calculator: its name, the question it answers, and where it lives once it runs in this build. */
+export type CalculatorSpec = { key: string; name: string; description: string; href?: Href };
 
 /** The six calculators Ligandry plans, in the order a bath chemist tends to reach for them. */
 export const CALCULATORS: readonly CalculatorSpec[] = [
@@ -13,7 +15,8 @@ export const CALCULATORS: readonly CalculatorSpec[] = [
     key: 'speciation',
     name: 'Speciation',
     description:
-      'Where the metal and ligand sit at equilibrium: each complex, free against total ligand, and the share of cyanide present as HCN.',
+      'Where the metal and ligand sit at equilibrium: each complex, its share of the metal, and which solids are present or close to forming, from the reviewed constants in the library.',
+    href: '/calculate/system',
   },
   {
     key: 'curves',

@@ -1,0 +1,139 @@
+import { useState } from 'react';
+
+import { COUNTER_CHOICES, LIGAND_CHOICES, METAL_CHOICES } from '@/components/screens/calculate/speciation-summary';
+import { checkForm, NO_ERRORS, type FormErrors } from '@/lib/api/form-errors';
+import { systemRequestSchema, type SystemRequest } from '@/shared/constants';
+
+/** Which list a component belongs to in the request. */
+export type ComponentGroup = 'metals' | 'ligands' | 'counterIons';
+
+/** The activity models a person can choose. */
+export type ActivityChoice = 'davies' | 'ideal';
+
+const ORDER: Record<ComponentGroup, readonly string[]> = {
+  metals: METAL_CHOICES.map((c) => c.formula),
+  ligands: LIGAND_CHOICES.map((c) => c.formula),
+  counterIons: COUNTER_CHOICES.map((c) => c.formula),
+};
+
+/** Field names that errors can sit beside (the totals add "totals.<formula>" for each chosen component). */
+const FIXED_FIELDS = ['metals', 'ligands', 'counterIons', 'solids', 'pH', 'activity', 'includeDrafts', 'temperatureC', 'totals'];
+
+/** A number typed by a person: "0.05", "5e-2" or "0,05"; undefined when empty, NaN when unreadable. */
+export function parseAmount(text: string): number | undefined {
+  const t = text.trim();
+  if (t === '') return undefined;
+  const normal = /^[^.]*,[^,]*$/.test(t) ? t.replace(',', '.') : t;
+  return /^[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?$/.test(normal) ? Number(normal) : Number.NaN;
+}
+
+/** The state of the system builder's inputs and the request they make. */
+export function useSystemForm() {
+  const [groups, setGroups] = useState<Record<ComponentGroup, string[]>>({ metals: [], ligands: [], counterIons: [] });
+  const [totals, setTotals] = useState<Record<string, string>>({});
+  const [pH, setPH] = useState('');
+  const [temperature, setTemperature] = useState('25');
+  const [activity, setActivity] = useState<ActivityChoice>('davies');
+  const [includeDrafts, setIncludeDrafts] = useState(false);
+  // null: every solid the ions can form (nothing sent); a list once the person changes it.
+  const [solids, setSolids] = useState<string[] | null>(null);
+  const [errors, setErrors] = useState<FormErrors>(NO_ERRORS);
+  // Bumped on every change so a result can tell that the inputs moved on since it was worked out.
+  const [version, setVersion] = useState(0);
+
+  const touched = () => setVersion((v) => v + 1);
+  const chosen = [...groups.metals, ...groups.ligands, ...groups.counterIons];
+
+  const toggle = (group: ComponentGroup, formula: string) => {
+    setGroups((now) => {
+      const on = now[group].includes(formula);
+      return { ...now, [group]: ORDER[group].filter((f) => (f === formula ? !on : now[group].includes(f))) };
+    });
+    // A different set of ions can form different solids: go back to "all of them".
+    setSolids(null);
+    touched();
+  };
+
+  /** Checks the inputs; the request to send, or the errors to show beside the fields. */
+  const toRequest = (): { ok: true; request: SystemRequest } | { ok: false; errors: FormErrors } => {
+    const fields: Record<string, string> = {};
+    const amounts: Record<string, number> = {};
+    for (const formula of chosen) {
+      const value = parseAmount(totals[formula] ?? '');
+      if (value === undefined) fields[`totals.${formula}`] = 'Enter the total in mol/L';
+      else if (Number.isNaN(value)) fields[`totals.${formula}`] = 'Must be a number of mol/L';
+      else amounts[formula] = value;
+    }
+    const pHValue = parseAmount(pH);
+    if (pHValue !== undefined && Number.isNaN(pHValue)) fields.pH = 'Must be a number (or leave it empty)';
+    const temperatureValue = parseAmount(temperature);
+    if (temperatureValue !== undefined && Number.isNaN(temperatureValue)) fields.temperatureC = 'Must be a number of °C (or leave it empty for 25 °C)';
+    const request: SystemRequest = {
+      metals: groups.metals,
+      ligands: groups.ligands,
+      counterIons: groups.counterIons,
+      totals: amounts,
+      activity,
+      includeDrafts,
+      ...(pHValue !== undefined && !Number.isNaN(pHValue) ? { pH: pHValue } : {}),
+      ...(temperatureValue !== undefined && !Number.isNaN(temperatureValue) ? { temperatureC: temperatureValue } : {}),
+      ...(solids ? { solids } : {}),
+    };
+    const check = checkForm(systemRequestSchema, request, knownFields(chosen));
+    const merged: FormErrors = check.ok ? { fields } : { ...check.errors, fields: { ...check.errors.fields, ...fields } };
+    if (Object.keys(merged.fields).length > 0 || merged.form) return { ok: false, errors: merged };
+    return { ok: true, request };
+  };
+
+  return {
+    groups,
+    chosen,
+    totals,
+    pH,
+    temperature,
+    activity,
+    includeDrafts,
+    solids,
+    errors,
+    version,
+    setErrors,
+    toggle,
+    toRequest,
+    knownFields: () => knownFields(chosen),
+    setTotal: (formula: string, text: string) => {
+      setTotals((now) => ({ ...now, [formula]: text }));
+      touched();
+    },
+    setPH: (text: string) => {
+      setPH(text);
+      touched();
+    },
+    setTemperature: (text: string) => {
+      setTemperature(text);
+      touched();
+    },
+    setActivity: (value: ActivityChoice) => {
+      setActivity(value);
+      touched();
+    },
+    setIncludeDrafts: (value: boolean) => {
+      setIncludeDrafts(value);
+      touched();
+    },
+    /** Turns one solid on or off, starting from `available` (every solid on) the first time. */
+    toggleSolid: (name: string, available: readonly string[]) => {
+      setSolids((now) => {
+        const current = now ?? [...available];
+        return current.includes(name) ? current.filter((s) => s !== name) : available.filter((s) => s === name || current.includes(s));
+      });
+      touched();
+    },
+  };
+}
+
+/** The system builder's form state and actions. */
+export type SystemForm = ReturnType<typeof useSystemForm>;
+
+function knownFields(chosen: readonly string[]): string[] {
+  return [...FIXED_FIELDS, ...chosen.map((f) => `totals.${f}`)];
+}

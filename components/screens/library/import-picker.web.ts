@@ -1,0 +1,60 @@
+import { useCallback, useEffect, useRef } from 'react';
+
+import { type UploadFile } from '@/lib/api/use-import';
+
+/** A file chosen for import: its name, its size in bytes when known, and the part to upload. */
+export type PickedFile = { name: string; size: number | null; part: UploadFile };
+
+/** What the browser's file chooser offers. */
+export const CSV_ACCEPT = '.csv,text/csv';
+
+/**
+ * Opens the browser's file chooser for one CSV file through a hidden <input type="file">, kept in
+ * the page while the screen is open; resolves null when the person cancels.
+ */
+export function useCsvPicker(): () => Promise<PickedFile | null> {
+  const input = useRef<HTMLInputElement | null>(null);
+  const settle = useRef<((file: PickedFile | null) => void) | null>(null);
+
+  useEffect(() => {
+    const el = document.createElement('input');
+    el.type = 'file';
+    el.accept = CSV_ACCEPT;
+    el.hidden = true;
+    el.tabIndex = -1;
+    el.setAttribute('aria-hidden', 'true');
+    const done = (file: PickedFile | null) => {
+      settle.current?.(file);
+      settle.current = null;
+    };
+    const onChange = () => {
+      const file = el.files?.[0];
+      done(file ? { name: file.name, size: file.size, part: file } : null);
+    };
+    const onCancel = () => done(null);
+    el.addEventListener('change', onChange);
+    el.addEventListener('cancel', onCancel);
+    document.body.appendChild(el);
+    input.current = el;
+    return () => {
+      el.removeEventListener('change', onChange);
+      el.removeEventListener('cancel', onCancel);
+      el.remove();
+      input.current = null;
+    };
+  }, []);
+
+  return useCallback(
+    () =>
+      new Promise<PickedFile | null>((resolve) => {
+        const el = input.current;
+        if (!el) return resolve(null);
+        settle.current?.(null);
+        settle.current = resolve;
+        // Cleared first so choosing the same file again still fires "change".
+        el.value = '';
+        el.click();
+      }),
+    [],
+  );
+}
