@@ -16,6 +16,7 @@ import { apiNotFound, errorHandler } from '@/server/middleware/error-handler';
 import { originCheck } from '@/server/middleware/origin-check';
 import { libraryRouter } from '@/server/library/routes';
 import { runsRouter } from '@/server/library/runs-routes';
+import { bathsRouter } from '@/server/baths/routes';
 import { healthRouter } from '@/server/routes/health';
 import { webRouter } from '@/server/static';
 
@@ -26,6 +27,8 @@ export type AppOptions = {
   version: string;
   /** Folder of the exported web app (index.html and _expo/). */
   webDir: string;
+  /** Folder for uploaded bath attachments (created when missing). */
+  uploadsDir: string;
   /** Largest accepted JSON body, as body-parser writes it ("100kb"). */
   jsonLimit?: string;
   /** Send HSTS and upgrade-insecure-requests, and mark the session cookie Secure (only when served over HTTPS). */
@@ -116,6 +119,7 @@ export function createApp(options: AppOptions): Express {
   api.use(outboxRouter(auth));
   api.use(libraryRouter(auth));
   api.use(runsRouter(auth));
+  api.use(bathsRouter(auth, options.uploadsDir));
   api.use(apiNotFound);
   app.use('/api', api);
 

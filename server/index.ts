@@ -76,6 +76,7 @@ async function main(): Promise<void> {
     logger,
     version: APP_VERSION,
     webDir: env.WEB_DIR,
+    uploadsDir: env.UPLOADS_DIR,
     jsonLimit: env.JSON_LIMIT,
     mailer,
     outbox: fakeSmtp !== null,

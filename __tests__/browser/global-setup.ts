@@ -3,6 +3,7 @@
 import { spawn, type ChildProcess } from 'node:child_process';
 import fs from 'node:fs';
 import net from 'node:net';
+import os from 'node:os';
 import path from 'node:path';
 
 import { testDatabaseUrl } from '../support/test-db';
@@ -52,7 +53,7 @@ export default async function globalSetup(): Promise<void> {
   let log = '';
   const child = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
     cwd: ROOT,
-    env: { ...process.env, PORT: String(port), HOST: '127.0.0.1', DATABASE_URL: dbUrl, LOG_LEVEL: 'warn', NODE_ENV: 'test', SEED_DEMO: '1' },
+    env: { ...process.env, PORT: String(port), HOST: '127.0.0.1', DATABASE_URL: dbUrl, LOG_LEVEL: 'warn', NODE_ENV: 'test', SEED_DEMO: '1', UPLOADS_DIR: fs.mkdtempSync(path.join(os.tmpdir(), 'ligandry-browser-uploads-')) },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
   child.stdout?.on('data', (d: Buffer) => (log += d.toString()));

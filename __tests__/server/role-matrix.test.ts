@@ -44,6 +44,18 @@ const MATRIX: Record<string, Rule> = {
   'POST /api/runs': ['chemist', 'technician'],
   'GET /api/runs': 'signed-in',
   'GET /api/runs/:id': 'signed-in',
+  'GET /api/baths': 'signed-in',
+  'POST /api/baths': ['chemist', 'technician'],
+  'GET /api/baths/:id': 'signed-in',
+  'PATCH /api/baths/:id': ['chemist', 'technician'],
+  'POST /api/baths/:id/archive': ['admin'],
+  'POST /api/baths/:id/restore': ['admin'],
+  'GET /api/baths/:id/analyses': 'signed-in',
+  'POST /api/baths/:id/analyses': ['chemist', 'technician'],
+  'POST /api/baths/:id/analyses/import': ['chemist', 'technician'],
+  'GET /api/baths/:id/attachments': 'signed-in',
+  'POST /api/baths/:id/attachments': ['chemist', 'technician'],
+  'GET /api/baths/:id/attachments/:attachmentId': 'signed-in',
 };
 
 function ruleOf(access: Access | null): Rule | null {

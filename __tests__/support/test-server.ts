@@ -17,6 +17,8 @@ import { createMailer } from '@/server/mail/mailer';
 
 export type TestServer = {
   app: Express;
+  /** Where this server keeps bath attachments (a temporary folder, removed on close). */
+  uploadsDir: string;
   server: Server;
   origin: string;
   db: DbHandle;
@@ -38,6 +40,7 @@ export async function startTestServer(
   const webDir = options.webDir ?? fs.mkdtempSync(path.join(os.tmpdir(), 'ligandry-web-'));
   // The starting constants library, as every start loads it (once per database).
   await seedLibrary(db.db);
+  const uploadsDir = fs.mkdtempSync(path.join(os.tmpdir(), 'ligandry-uploads-'));
   const smtp = await startFakeSmtp(db.db);
   const mailer = createMailer(smtp.url, 'Ligandry test <no-reply@ligandry.test>');
   let origin = '';
@@ -46,6 +49,7 @@ export async function startTestServer(
     logger: createLogger('silent'),
     version: '0.0.0-test',
     webDir,
+    uploadsDir,
     mailer,
     outbox: options.outbox ?? true,
     publicUrl: () => origin,
@@ -58,6 +62,7 @@ export async function startTestServer(
   origin = `http://127.0.0.1:${address.port}`;
   return {
     app,
+    uploadsDir,
     server,
     origin,
     db,
@@ -71,6 +76,7 @@ export async function startTestServer(
       await smtp.close();
       await db.close();
       if (ownWebDir) fs.rmSync(webDir, { recursive: true, force: true });
+      fs.rmSync(uploadsDir, { recursive: true, force: true });
     },
   };
 }

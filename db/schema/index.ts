@@ -2,3 +2,4 @@
 export * from './audit';
 export * from './auth';
 export * from './library';
+export * from './baths';

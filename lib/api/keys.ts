@@ -32,6 +32,15 @@ export const keys = {
   buildSystem: '/api/systems/build',
   runs: '/api/runs',
   run: (id: string) => `/api/runs/${encodeURIComponent(id)}`,
+  baths: (query: Record<string, string | undefined> = {}) => withQuery('/api/baths', query),
+  bathsCreate: '/api/baths',
+  bath: (id: string) => `/api/baths/${encodeURIComponent(id)}`,
+  bathArchive: (id: string) => `/api/baths/${encodeURIComponent(id)}/archive`,
+  bathRestore: (id: string) => `/api/baths/${encodeURIComponent(id)}/restore`,
+  analyses: (bathId: string) => `/api/baths/${encodeURIComponent(bathId)}/analyses`,
+  analysesImport: (bathId: string) => `/api/baths/${encodeURIComponent(bathId)}/analyses/import`,
+  attachments: (bathId: string) => `/api/baths/${encodeURIComponent(bathId)}/attachments`,
+  attachment: (bathId: string, id: string) => `/api/baths/${encodeURIComponent(bathId)}/attachments/${encodeURIComponent(id)}`,
 } as const;
 
 /** A path with the non-empty query parameters in a stable order (so SWR keys match). */

@@ -28,7 +28,7 @@ export interface ParsedCsv {
 /** Reads CSV text; blank lines are skipped; a BOM is dropped. */
 export function parseCsv(text: string): ParsedCsv {
   const body = text.replace(/^\uFEFF/, '');
-  const result = Papa.parse<string[]>(body, { skipEmptyLines: false });
+  const result = Papa.parse<string[]>(body, { skipEmptyLines: false, delimiter: ',' });
   const rows = result.data;
   const errors = result.errors.map((e) => ({ line: (e.row ?? 0) + 1, message: e.message }));
   const header = (rows[0] ?? []).map((h) => h.trim().toLowerCase());
