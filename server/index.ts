@@ -47,7 +47,7 @@ async function main(): Promise<void> {
 
   try {
     if (env.SEED_DEMO) {
-      process.stdout.write(describePrepare(await prepareDemoDatabase(env.DATABASE_URL)));
+      process.stdout.write(describePrepare(await prepareDemoDatabase(env.DATABASE_URL, env.UPLOADS_DIR)));
     } else {
       process.stdout.write(describePrepare(await prepareDatabase(env.DATABASE_URL, { demo: false })));
     }

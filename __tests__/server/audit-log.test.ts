@@ -3,6 +3,10 @@ import { eq, sql } from 'drizzle-orm';
 import { createDb, type DbHandle } from '@/db/client';
 import { auditLog } from '@/db/schema';
 import { DEMO_SEED_VERSION, seedDemo } from '@/db/seed';
+import { demoUploadsDir } from '@/__tests__/support/test-server';
+
+// Demo attachments land here rather than in the checkout.
+const DEMO_UPLOADS = demoUploadsDir();
 
 // Drizzle wraps the database error; the trigger's message is on its cause.
 async function reason(query: PromiseLike<unknown>): Promise<string> {
@@ -47,8 +51,8 @@ describe('audit_log and the demo seed', () => {
   });
 
   it('seeds once per seed version, also when two seeds race', async () => {
-    const results = await Promise.all([seedDemo(handle.db), seedDemo(handle.db)]);
-    const again = await seedDemo(handle.db);
+    const results = await Promise.all([seedDemo(handle.db, DEMO_UPLOADS), seedDemo(handle.db, DEMO_UPLOADS)]);
+    const again = await seedDemo(handle.db, DEMO_UPLOADS);
     // At most one of them applies it (another test file may have seeded this database first).
     expect(results.filter((r) => r.applied).length).toBeLessThanOrEqual(1);
     expect(again.applied).toBe(false);

@@ -4,8 +4,11 @@ import { createDb, type DbHandle } from '@/db/client';
 import { users } from '@/db/schema';
 import { seedDemo } from '@/db/seed';
 import { DEMO_PASSWORD, DEMO_TEAM } from '@/db/seed/team';
-import { startTestServer, type TestServer } from '@/__tests__/support/test-server';
+import { demoUploadsDir, startTestServer, type TestServer } from '@/__tests__/support/test-server';
 import { signIn } from '@/__tests__/support/users';
+
+// Demo attachments land here rather than in the checkout.
+const DEMO_UPLOADS = demoUploadsDir();
 
 describe('the demo team', () => {
   let handle: DbHandle;
@@ -20,8 +23,8 @@ describe('the demo team', () => {
   });
 
   it('seeds one account per role, idempotently, each able to sign in with the demo password', async () => {
-    await seedDemo(handle.db);
-    await seedDemo(handle.db);
+    await seedDemo(handle.db, DEMO_UPLOADS);
+    await seedDemo(handle.db, DEMO_UPLOADS);
     const emails = DEMO_TEAM.map((u) => u.email);
     const rows = await handle.db.select().from(users).where(inArray(users.email, emails));
     expect(rows).toHaveLength(5);
@@ -37,7 +40,7 @@ describe('the demo team', () => {
     const before = process.env.NODE_ENV;
     process.env.NODE_ENV = 'production';
     try {
-      await expect(seedDemo(handle.db)).resolves.toMatchObject({ applied: false, production: true });
+      await expect(seedDemo(handle.db, DEMO_UPLOADS)).resolves.toMatchObject({ applied: false, production: true });
     } finally {
       process.env.NODE_ENV = before;
     }

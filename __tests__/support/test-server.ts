@@ -31,7 +31,7 @@ export type TestServer = {
 
 /** Starts the app against DATABASE_URL (or `dbUrl`) with a throwaway web build folder. */
 export async function startTestServer(
-  options: { dbUrl?: string; webDir?: string; signInLimits?: SignInLimits; outbox?: boolean } = {},
+  options: { dbUrl?: string; webDir?: string; uploadsDir?: string; signInLimits?: SignInLimits; outbox?: boolean } = {},
 ): Promise<TestServer> {
   const url = options.dbUrl ?? process.env.DATABASE_URL;
   if (!url) throw new Error('DATABASE_URL is not set: the server project global setup makes it.');
@@ -40,7 +40,8 @@ export async function startTestServer(
   const webDir = options.webDir ?? fs.mkdtempSync(path.join(os.tmpdir(), 'ligandry-web-'));
   // The starting constants library, as every start loads it (once per database).
   await seedLibrary(db.db);
-  const uploadsDir = fs.mkdtempSync(path.join(os.tmpdir(), 'ligandry-uploads-'));
+  const ownUploads = !options.uploadsDir;
+  const uploadsDir = options.uploadsDir ?? fs.mkdtempSync(path.join(os.tmpdir(), 'ligandry-uploads-'));
   const smtp = await startFakeSmtp(db.db);
   const mailer = createMailer(smtp.url, 'Ligandry test <no-reply@ligandry.test>');
   let origin = '';
@@ -76,7 +77,15 @@ export async function startTestServer(
       await smtp.close();
       await db.close();
       if (ownWebDir) fs.rmSync(webDir, { recursive: true, force: true });
-      fs.rmSync(uploadsDir, { recursive: true, force: true });
+      if (ownUploads) fs.rmSync(uploadsDir, { recursive: true, force: true });
     },
   };
+}
+
+/** One folder per test database for the demo seed's files, so every test file that seeds the demo shop finds them. */
+export function demoUploadsDir(): string {
+  const name = new URL(process.env.DATABASE_URL as string).pathname.slice(1);
+  const dir = path.join(os.tmpdir(), `${name}-demo-uploads`);
+  fs.mkdirSync(dir, { recursive: true });
+  return dir;
 }

@@ -2,13 +2,16 @@ import { and, eq, sql } from 'drizzle-orm';
 
 import type { Db } from '@/db/client';
 import { auditLog } from '@/db/schema';
+import fs from 'node:fs/promises';
+
+import { seedBaths } from '@/db/seed/baths';
 import { seedTeam } from '@/db/seed/team';
 
 /**
  * Version of the demo data set. Raise it when a feature adds demo records; each version is
  * applied once per database, so `npm start` can run the seed on every start.
  */
-export const DEMO_SEED_VERSION = 2;
+export const DEMO_SEED_VERSION = 3;
 
 // Arbitrary constant for pg_advisory_xact_lock, so two starts at once do not both seed.
 const SEED_LOCK_KEY = 4_711_001;
@@ -18,12 +21,23 @@ export type SeedResult = { applied: boolean; version: number; production?: boole
 
 /**
  * Seeds the demo shop once per seed version, in one transaction: the demo team (one account per
- * role), then a record of the seed in the audit log. Feature seeds (constants, baths, runs) join
+ * role), the demo baths with their analyses and a lab report (v3), then a record of the seed in the audit log. Feature seeds (constants, baths, runs) join
  * this transaction as they are built. Never with NODE_ENV=production: demo accounts share a
  * published password.
  */
-export async function seedDemo(db: Db): Promise<SeedResult> {
+export async function seedDemo(db: Db, uploadsDir: string): Promise<SeedResult> {
   if (process.env.NODE_ENV === 'production') return { applied: false, version: DEMO_SEED_VERSION, production: true };
+  const written: string[] = [];
+  try {
+    return await seedDemoOnce(db, uploadsDir, written);
+  } catch (err) {
+    // The transaction rolled back: take away the demo files it wrote.
+    await Promise.all(written.map((f) => fs.rm(f, { force: true })));
+    throw err;
+  }
+}
+
+async function seedDemoOnce(db: Db, uploadsDir: string, written: string[]): Promise<SeedResult> {
   return db.transaction(async (tx) => {
     await tx.execute(sql`select pg_advisory_xact_lock(${SEED_LOCK_KEY})`);
     const done = await tx
@@ -35,11 +49,13 @@ export async function seedDemo(db: Db): Promise<SeedResult> {
       .limit(1);
     if (done.length > 0) return { applied: false, version: DEMO_SEED_VERSION };
     const team = await seedTeam(tx);
+    const demoBaths = await seedBaths(tx, uploadsDir);
+    written.push(...demoBaths.files);
     await tx.insert(auditLog).values({
       actor: 'system:seed',
       action: 'demo.seeded',
       subject: 'shop:demo',
-      payload: { version: String(DEMO_SEED_VERSION), shop: 'Harbourside Finishing (invented demo shop)', accountsAdded: team },
+      payload: { version: String(DEMO_SEED_VERSION), shop: 'Harbourside Finishing (invented demo shop)', accountsAdded: team, bathsAdded: demoBaths.baths },
     });
     return { applied: true, version: DEMO_SEED_VERSION };
   });
