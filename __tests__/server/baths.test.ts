@@ -121,10 +121,10 @@ describe('the analysis log', () => {
       carbonate: { value: 45 },
     });
     expect(res.status).toBe(201);
-    // 4.0 troy oz/gal: 4 x 31.1034768 g / 3.785411784 L = 32.8664 g/L; / 107.8682 g/mol (Ag, IUPAC) = 0.304691 mol/L.
-    expect(res.body.values.metal).toBeCloseTo(0.304691, 5);
-    // 80 g/L KCN / 65.116 g/mol (K 39.0983 + C 12.011 + N 14.007) = 1.228576 mol/L of cyanide.
-    expect(res.body.values.freeLigand).toBeCloseTo(1.228576, 5);
+    // 4.0 troy oz/gal: 4 x 31.1034768 g / 3.785411784 L = 32.8665 g/L; / 107.8682 g/mol (Ag, IUPAC) = 0.304693 mol/L.
+    expect(res.body.values.metal).toBeCloseTo(0.304693, 5);
+    // 80 g/L KCN / 65.1163 g/mol (K 39.0983 + C 12.011 + N 14.007) = 1.228571 mol/L of cyanide.
+    expect(res.body.values.freeLigand).toBeCloseTo(1.228571, 5);
     expect(res.body.entered.metal).toEqual({ value: 4, unit: 'troy oz/gal' });
     expect(res.body.sampledAt).toBe('2026-11-20T12:00:00.000Z');
     expect(res.body.outOfRange).toEqual([{ quantity: 'freeLigand', value: expect.closeTo(80, 9), side: 'below' }]);
