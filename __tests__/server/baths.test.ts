@@ -87,6 +87,10 @@ describe('bath records', () => {
     expect(edited.body.targets.pH).toEqual({ min: 11.8, max: 12.6 });
     const [entry] = await t.db.db.select().from(auditLog).where(eq(auditLog.action, 'bath.updated'));
     expect(entry?.payload).toMatchObject({ changes: { targets: { from: { pH: { min: 11.5 } }, to: { pH: { min: 11.8 } } } } });
+    // A PATCH of one field leaves the others as they were.
+    const renamed = await chemist.patch(`/api/baths/${bath.id}`).send({ name: 'Test silver, tank 10b' });
+    expect(renamed.body).toMatchObject({ name: 'Test silver, tank 10b', volumeUnit: 'gal', site: 'Test site', temperatureC: 24, targets: { pH: { min: 11.8, max: 12.6 } } });
+    expect(renamed.body.makeUp).toHaveLength(2);
 
     expect((await chemist.post(`/api/baths/${bath.id}/archive`)).status).toBe(403);
     const archived = await admin.post(`/api/baths/${bath.id}/archive`);

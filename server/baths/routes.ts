@@ -99,7 +99,11 @@ export function bathsRouter(ctx: AuthContext, uploadsDir: string): Router {
 
   router.patch('/baths/:id', allow('chemist', 'technician'), async (req: Request, res: Response) => {
     const user = requireUser(res);
-    const patch = bathPatchSchema.parse(req.body);
+    const parsed = bathPatchSchema.parse(req.body);
+    // zod fills defaults into absent fields: keep only what the request named, so a PATCH of the
+    // name leaves the targets, make-up and notes as they are.
+    const given = new Set(Object.keys((req.body ?? {}) as object));
+    const patch = Object.fromEntries(Object.entries(parsed).filter(([k]) => given.has(k)));
     const bath = await db.transaction(async (tx) => {
       const before = await findBath(tx, req.params.id, true);
       if (before.status === 'archived') throw new HttpError(409, 'conflict', 'This bath is archived; an admin can restore it before it is edited.');
@@ -114,7 +118,7 @@ export function bathsRouter(ctx: AuthContext, uploadsDir: string): Router {
         metalUnit: current.metalUnit,
         ligandUnit: current.ligandUnit,
         // A new process brings its own ligand salt unless one is given.
-        ligandAs: patch.process && patch.process !== current.process ? undefined : current.ligandAs,
+        ligandAs: patch.process !== undefined && patch.process !== current.process ? undefined : current.ligandAs,
         targets: current.targets,
         site: current.site,
         ownerId: current.owner.id,
