@@ -193,6 +193,9 @@ export const bathQuerySchema = z.object({
   status: z.enum([...BATH_STATUSES, 'all'], { error: 'must be active, archived or all' }).default('active'),
 });
 
+// A date, or an ISO 8601 date and time with its offset.
+const SAMPLED_AT = /^\d{4}-\d{2}-\d{2}(T\d{2}:\d{2}(:\d{2}(\.\d+)?)?(Z|[+-]\d{2}:\d{2}))?$/;
+
 /** One entered value: the number and the unit it was entered in (pH has no unit). */
 export const enteredValueSchema = z.object({
   value: finite('the value').min(0, 'cannot be negative').max(100_000, 'is too large'),
@@ -202,7 +205,10 @@ export const enteredValueSchema = z.object({
 export const analysisInputSchema = z
   .object({
     /** ISO date or date-time of sampling; not in the future. */
-    sampledAt: z.iso.datetime({ offset: true, error: 'give the date and time of sampling (ISO 8601)' }).or(z.iso.date({ error: 'give the date of sampling (YYYY-MM-DD)' })),
+    sampledAt: z
+      .string({ error: 'give the date of sampling as YYYY-MM-DD' })
+      .trim()
+      .refine((v) => SAMPLED_AT.test(v) && !Number.isNaN(Date.parse(v.length === 10 ? `${v}T12:00:00Z` : v)), 'give the date of sampling as YYYY-MM-DD, or a date and time such as 2026-11-20T09:30:00Z'),
     analyst: z.string({ error: 'name the analyst' }).trim().min(1, 'name the analyst').max(100, 'must be at most 100 characters'),
     metal: enteredValueSchema.optional(),
     freeLigand: enteredValueSchema.optional(),

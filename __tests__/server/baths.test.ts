@@ -148,6 +148,8 @@ describe('the analysis log', () => {
     expect(future.body.error.details[0]).toEqual({ path: 'sampledAt', message: 'is in the future' });
     const upside = await technician.post(path).send({ sampledAt: '2026-11-20', analyst: 'A', freeLigand: { value: 200 }, totalLigand: { value: 100 } });
     expect(upside.body.error.details[0].path).toBe('freeLigand');
+    const badDate = await technician.post(path).send({ sampledAt: '20/11/2026', analyst: 'A', pH: 5 });
+    expect(badDate.body.error.details[0]).toEqual({ path: 'sampledAt', message: 'give the date of sampling as YYYY-MM-DD, or a date and time such as 2026-11-20T09:30:00Z' });
     const nothing = await technician.post(path).send({ sampledAt: '2026-11-20', analyst: 'A' });
     expect(nothing.status).toBe(400);
     expect((await reviewer.post(path).send({ sampledAt: '2026-11-20', analyst: 'A', pH: 5 })).status).toBe(403);
