@@ -48,6 +48,8 @@ export const DEFAULT_ROUTES: Routes = {
   '/api/auth/options': { status: 200, body: { outbox: false } },
   // The library's opening view, empty.
   '/api/constants?dir=asc&sort=reaction&status=approved': { status: 200, body: [] },
+  // The bath list's opening view (baths in service), empty.
+  '/api/baths?status=active': { status: 200, body: [] },
 };
 
 /** Mocks fetch with answers per route; anything unlisted answers 404 not_found. Returns the mock to inspect calls. */

@@ -1,4 +1,4 @@
 import { BathsScreen } from '@/components/screens/baths/baths-screen';
 
-/** /baths: the Baths section's landing screen. */
+/** /baths: the bath list, searchable and filterable by process and status. */
 export default BathsScreen;
