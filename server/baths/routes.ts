@@ -26,6 +26,11 @@ import {
 
 const DAY_MS = 24 * 3600 * 1000;
 
+/** Whole calendar days (UTC) from one moment to a later one: yesterday evening to this morning is 1. */
+function calendarDaysBetween(from: number, to: number): number {
+  return Math.max(0, Math.floor(to / DAY_MS) - Math.floor(from / DAY_MS));
+}
+
 /** Fields that differ between two rows, for the audit log. */
 function changes(before: BathRow, after: Partial<BathRow>): Record<string, { from: unknown; to: unknown }> {
   const out: Record<string, { from: unknown; to: unknown }> = {};
@@ -73,7 +78,7 @@ export function bathsRouter(ctx: AuthContext, uploadsDir: string): Router {
         ...bath,
         analysisCount: Number(stat?.n ?? 0),
         lastAnalysisAt: lastAt?.toISOString() ?? null,
-        lastAnalysisAgeDays: lastAt ? Math.max(0, Math.floor((now - lastAt.getTime()) / DAY_MS)) : null,
+        lastAnalysisAgeDays: lastAt ? calendarDaysBetween(lastAt.getTime(), now) : null,
         outOfRange: last ? outOfRange(bath, valuesOf(last)) : [],
       };
     });
