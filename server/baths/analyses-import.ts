@@ -15,12 +15,14 @@ import { writeAudit } from '@/server/audit';
 import { analysisColumns } from '@/server/baths/analysis-values';
 import { bathOf, findBath } from '@/server/baths/store';
 import { HttpError } from '@/server/http-error';
+import { output } from '@/server/output';
 import { parseCsv } from '@/server/library/csv';
 import {
   ANALYSIS_CSV_REQUIRED,
   ANALYSIS_IMPORT_MAX_BYTES,
   ANALYSIS_IMPORT_MAX_ROWS,
   type AnalysisImportReport,
+  analysisImportReportSchema,
   analysisInputSchema,
   BATH_UNITS,
   type BathUnit,
@@ -205,7 +207,7 @@ export function analysesImportRouter(ctx: AuthContext): Router {
         report,
       );
     }
-    res.json(report);
+    res.json(output(analysisImportReportSchema, report));
   });
   return router;
 }

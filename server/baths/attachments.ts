@@ -17,7 +17,8 @@ import type { AuthContext } from '@/server/auth/context';
 import { writeAudit } from '@/server/audit';
 import { findBath, namesOf } from '@/server/baths/store';
 import { HttpError } from '@/server/http-error';
-import { type Attachment, ATTACHMENT_MAX_BYTES, type ATTACHMENT_TYPES } from '@/shared/baths';
+import { output } from '@/server/output';
+import { type Attachment, attachmentListSchema, ATTACHMENT_MAX_BYTES, attachmentSchema, type ATTACHMENT_TYPES } from '@/shared/baths';
 
 type AttachmentType = (typeof ATTACHMENT_TYPES)[number];
 
@@ -79,7 +80,7 @@ export function attachmentsRouter(ctx: AuthContext, uploadsDir: string): Router 
     const bath = await findBath(db, req.params.id);
     const rows = await db.select().from(attachments).where(eq(attachments.bathId, bath.id)).orderBy(desc(attachments.uploadedAt));
     const names = await namesOf(db, rows.map((r) => r.uploadedBy));
-    res.json(rows.map((r) => toAttachment(r, names)));
+    res.json(output(attachmentListSchema, rows.map((r) => toAttachment(r, names))));
   });
 
   router.post('/baths/:id/attachments', allow('chemist', 'technician'), receiveFile(), async (req: Request, res: Response) => {
@@ -123,7 +124,7 @@ export function attachmentsRouter(ctx: AuthContext, uploadsDir: string): Router 
         await fs.rename(temp, final);
         return toAttachment(row, new Map([[user.id, user.name]]));
       });
-      res.status(201).json(attachment);
+      res.status(201).json(output(attachmentSchema, attachment));
     } catch (err) {
       await fs.rm(temp, { force: true });
       await fs.rm(final, { force: true }).catch(() => undefined);

@@ -15,8 +15,13 @@ import { analysesImportRouter } from '@/server/baths/analyses-import';
 import { attachmentsRouter } from '@/server/baths/attachments';
 import { bathColumns, bathOf, findBath, namesOf, outOfRange, toAnalysis, toBath, valuesOf } from '@/server/baths/store';
 import { HttpError } from '@/server/http-error';
+import { output } from '@/server/output';
 import {
   analysisInputSchema,
+  analysisListSchema,
+  analysisSchema,
+  bathListSchema,
+  bathSchema,
   bathInputSchema,
   bathPatchSchema,
   bathQuerySchema,
@@ -82,7 +87,7 @@ export function bathsRouter(ctx: AuthContext, uploadsDir: string): Router {
         outOfRange: last ? outOfRange(bath, valuesOf(last)) : [],
       };
     });
-    res.json(list);
+    res.json(output(bathListSchema, list));
   });
 
   router.post('/baths', allow('chemist', 'technician'), async (req: Request, res: Response) => {
@@ -95,11 +100,11 @@ export function bathsRouter(ctx: AuthContext, uploadsDir: string): Router {
       await writeAudit(tx, { actor: user.id, action: 'bath.created', subject: `bath:${row.id}`, payload: { name: row.name, process: row.process } });
       return bathOf(tx, row);
     });
-    res.status(201).json(bath);
+    res.status(201).json(output(bathSchema, bath));
   });
 
   router.get('/baths/:id', signedIn, async (req: Request, res: Response) => {
-    res.json(await bathOf(db, await findBath(db, req.params.id)));
+    res.json(output(bathSchema, await bathOf(db, await findBath(db, req.params.id))));
   });
 
   router.patch('/baths/:id', allow('chemist', 'technician'), async (req: Request, res: Response) => {
@@ -137,7 +142,7 @@ export function bathsRouter(ctx: AuthContext, uploadsDir: string): Router {
       if (Object.keys(diff).length > 0) await writeAudit(tx, { actor: user.id, action: 'bath.updated', subject: `bath:${row.id}`, payload: { name: row.name, changes: diff } });
       return bathOf(tx, row);
     });
-    res.json(bath);
+    res.json(output(bathSchema, bath));
   });
 
   for (const [path, to] of [
@@ -159,7 +164,7 @@ export function bathsRouter(ctx: AuthContext, uploadsDir: string): Router {
         await writeAudit(tx, { actor: user.id, action: archived ? 'bath.archived' : 'bath.restored', subject: `bath:${row.id}`, payload: { name: row.name } });
         return bathOf(tx, row);
       });
-      res.json(bath);
+      res.json(output(bathSchema, bath));
     });
   }
 
@@ -168,7 +173,7 @@ export function bathsRouter(ctx: AuthContext, uploadsDir: string): Router {
     const list = await db.select().from(analyses).where(eq(analyses.bathId, row.id)).orderBy(asc(analyses.sampledAt), asc(analyses.createdAt));
     const names = await namesOf(db, [row.ownerId, row.createdBy, ...list.map((a) => a.enteredBy)]);
     const bath = toBath(row, names);
-    res.json(list.map((a) => toAnalysis(a, bath, names)));
+    res.json(output(analysisListSchema, list.map((a) => toAnalysis(a, bath, names))));
   });
 
   router.post('/baths/:id/analyses', allow('chemist', 'technician'), async (req: Request, res: Response) => {
@@ -191,7 +196,7 @@ export function bathsRouter(ctx: AuthContext, uploadsDir: string): Router {
       await writeAudit(tx, { actor: user.id, action: 'analysis.added', subject: `bath:${row.id}`, payload: { analysis: stored.id, sampledAt: stored.sampledAt.toISOString(), entered: stored.entered } });
       return toAnalysis(stored, bath, new Map([[user.id, user.name]]));
     });
-    res.status(201).json(analysis);
+    res.status(201).json(output(analysisSchema, analysis));
   });
 
   router.use(analysesImportRouter(ctx));
