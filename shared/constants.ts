@@ -1,5 +1,7 @@
 import { z } from 'zod';
 
+import { CALCULATOR_KEYS } from './calculators';
+
 // The constants library, the system builder and saved runs: request and response shapes shared by
 // the client and the server. Routes (all under /api):
 //   GET    /species?q=                         (signed in)            -> Species[] (the catalogue)
@@ -12,9 +14,10 @@ import { z } from 'zod';
 //   POST   /constants/:id/retire               (reviewer) {note}       -> ConstantSummary
 //   POST   /constants/import                   (chemist) multipart: file (CSV), mode -> ImportReport
 //   POST   /systems/build                      (signed in) SystemRequest -> BuiltSystem
-//   POST   /runs                               (chemist, technician) RunInput -> 201 Run
-//   GET    /runs                               (signed in)            -> RunSummary[] (newest first)
-//   GET    /runs/:id                           (signed in)            -> Run
+//   POST   /runs                               (chemist, technician) RunInput -> 201 Run (built and solved again here)
+//   GET    /runs?bath=&calculator=&author=&from=&to=  (signed in)     -> RunSummary[] (newest first)
+//   GET    /runs/:id                           (signed in)            -> Run (any team member: the share link)
+//   DELETE /runs/:id                           (its author, or an admin) -> 204 (soft delete)
 //
 // A constant is one version of a lineage. Edits never overwrite: a revision is a new version of
 // the same lineage (same reaction) that names the version it replaces; approving it retires that
@@ -284,11 +287,16 @@ export const builtSystemSchema = z.object({
 });
 export type BuiltSystem = z.infer<typeof builtSystemSchema>;
 
-export const CALCULATORS = ['speciation'] as const;
+/** Calculators a run may hold (shared/calculators.ts). */
+export const CALCULATORS = CALCULATOR_KEYS;
 export const runInputSchema = z.object({
   title: z.string().trim().max(200, 'must be at most 200 characters').default(''),
   calculator: z.enum(CALCULATORS, { error: `must be one of ${CALCULATORS.join(', ')}` }).default('speciation'),
   system: systemRequestSchema,
+  /** The calculator's parameters (shared/calculations.ts PARAMS_SCHEMAS); checked by the server. */
+  params: z.record(z.string(), z.unknown()).default({}),
+  /** The bath the run was made for. */
+  bathId: z.string().uuid('is not a bath').optional(),
 });
 export type RunInput = z.input<typeof runInputSchema>;
 
@@ -326,8 +334,20 @@ export const runSummarySchema = z.object({
   createdAt: z.string(),
   status: z.enum(['converged', 'not_converged']),
   usesDrafts: z.boolean(),
+  /** The one-line answer. */
+  verdict: z.string(),
+  bath: z.object({ id: z.string(), name: z.string() }).nullable(),
 });
 export type RunSummary = z.infer<typeof runSummarySchema>;
+
+/** Filters of the runs list; from and to are dates (YYYY-MM-DD, inclusive). */
+export const runQuerySchema = z.object({
+  bath: z.string().uuid('is not a bath').optional(),
+  calculator: z.enum(CALCULATORS, { error: `must be one of ${CALCULATORS.join(', ')}` }).optional(),
+  author: z.string().uuid('is not a person').optional(),
+  from: z.iso.date({ error: 'must be a date, YYYY-MM-DD' }).optional(),
+  to: z.iso.date({ error: 'must be a date, YYYY-MM-DD' }).optional(),
+});
 export const runListSchema = z.array(runSummarySchema);
 
 export const runSchema = runSummarySchema.extend({
@@ -337,5 +357,7 @@ export const runSchema = runSummarySchema.extend({
   result: solveResultSchema,
   constants: z.array(runConstantSchema),
   warnings: z.array(z.string()),
+  /** The calculator's own result (lib/calculators), JSON-safe; null for runs saved before calculators had one. */
+  output: z.unknown(),
 });
 export type Run = z.infer<typeof runSchema>;

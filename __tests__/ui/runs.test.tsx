@@ -8,8 +8,8 @@ const cora = { id: 'u-chem', name: 'Cora Quill' };
 const theo = { id: 'u-tech', name: 'Theo Bench' };
 
 const summaries = [
-  { id: 'run-2', title: 'Fixer tank 2, after top-up', calculator: 'speciation', author: theo, createdAt: '2026-03-04T09:00:00.000Z', status: 'converged', usesDrafts: true },
-  { id: 'run-1', title: '', calculator: 'speciation', author: cora, createdAt: '2026-03-01T15:30:00.000Z', status: 'not_converged', usesDrafts: false },
+  { id: 'run-2', title: 'Fixer tank 2, after top-up', calculator: 'speciation', author: theo, createdAt: '2026-03-04T09:00:00.000Z', status: 'converged', usesDrafts: true, verdict: 'Silver is held mostly as Ag(S2O3)2-3 (> 99 %); no solid forms.', bath: null },
+  { id: 'run-1', title: '', calculator: 'speciation', author: cora, createdAt: '2026-03-01T15:30:00.000Z', status: 'not_converged', usesDrafts: false, verdict: '', bath: null },
 ];
 
 // Silver chloride in dilute ammonia, as the server stored it when the run was saved.
@@ -63,6 +63,7 @@ const run = {
     { ...constant(40, 3, 'AgCl(s) = Ag+ + Cl-', -9.75, 'solubility_product'), supersededBy: null, statusNow: 'approved' },
   ],
   warnings: ['Uses 1 draft not yet reviewed.'],
+  output: null,
 };
 
 function open(url: string, routes: Routes) {

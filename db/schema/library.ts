@@ -17,6 +17,7 @@ import {
 } from 'drizzle-orm/pg-core';
 
 import { users } from './auth';
+import { baths } from './baths';
 
 // The constants library and the runs that use it. A constant row is one version of a lineage
 // (the same reaction over time); its values never change after insert (a trigger refuses it):
@@ -123,11 +124,15 @@ export const runs = pgTable(
     authorId: text('author_id')
       .notNull()
       .references(() => users.id),
-    bathId: text('bath_id'),
+    bathId: text('bath_id').references(() => baths.id),
+    // The one-line answer, and the calculator's own result (JSON-safe).
+    verdict: text('verdict').notNull().default(''),
+    output: jsonb('output'),
+    deletedBy: text('deleted_by').references(() => users.id),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     deletedAt: timestamp('deleted_at', { withTimezone: true }),
   },
-  (t) => [index('runs_created_idx').on(t.createdAt), index('runs_author_idx').on(t.authorId)],
+  (t) => [index('runs_created_idx').on(t.createdAt), index('runs_author_idx').on(t.authorId), index('runs_bath_idx').on(t.bathId)],
 );
 
 export const runConstants = pgTable(

@@ -1,15 +1,17 @@
-// Building a system from the library, and saved runs: the server builds and solves again when a
-// run is saved, so the stored result is authoritative; a run keeps the exact constant versions it
-// used, whatever the library does later.
+// Calculations and saved runs. The server builds the system from the library and runs the
+// calculator again when a run is saved, so the stored result is authoritative; a run keeps the
+// exact constant versions it used, whatever the library does later. POST /solve takes a problem
+// in the general form, as the command line does.
 import { randomUUID } from 'node:crypto';
 
-import { and, desc, eq, isNull } from 'drizzle-orm';
+import { and, desc, eq, gte, isNull, lt, type SQL } from 'drizzle-orm';
 import { type Request, type Response, Router } from 'express';
 import { z } from 'zod';
 
-import { constants, runConstants, runs, type RunRow, users } from '@/db/schema';
+import { baths, constants, runConstants, runs, type RunRow, users } from '@/db/schema';
 import { CalculatorInputError } from '@/lib/calculators/errors';
-import { ENGINE_VERSION } from '@/lib/engine';
+import { type CalculationRun, jsonSafe, runCalculation } from '@/lib/calculators/run-calculation';
+import { ENGINE_VERSION, EngineInputError, type Problem, solve } from '@/lib/engine';
 import { BuildError, buildSystem, type BuildOutput } from '@/lib/library/build';
 import { solveBuilt } from '@/lib/library/solve-built';
 import { allow, requireUser, signedIn } from '@/server/auth/access';
@@ -17,19 +19,28 @@ import type { AuthContext } from '@/server/auth/context';
 import { writeAudit } from '@/server/audit';
 import { HttpError } from '@/server/http-error';
 import { catalogueOf, libraryConstants, readLibrary, type Tx } from '@/server/library/store';
+import { output } from '@/server/output';
+import { calculationOutcomeSchema, calculationRequestSchema, type CalculatorKey, PARAMS_SCHEMAS } from '@/shared/calculations';
 import {
   type ConstantStatus,
   type ConstantUse,
   type Run,
   runInputSchema,
+  runListSchema,
+  runQuerySchema,
+  runSchema,
   type RunSummary,
   systemRequestSchema,
   type SolveResultJson,
-  type SystemRequest,
 } from '@/shared/constants';
 
 const RUN_LIST_LIMIT = 200;
+const SOLVE_BATCH_LIMIT = 100;
 const runIdParam = z.string().uuid();
+
+function unprocessable(field: string, message: string): HttpError {
+  return new HttpError(422, 'validation_failed', `${field}: ${message}`, [{ path: field, message }]);
+}
 
 /** Builds from the library as it is now in `tx`; a selection it cannot build is a 422 naming the field. */
 export async function buildFromLibrary(tx: Tx, request: z.output<typeof systemRequestSchema>): Promise<BuildOutput> {
@@ -37,23 +48,38 @@ export async function buildFromLibrary(tx: Tx, request: z.output<typeof systemRe
   try {
     return buildSystem(catalogueOf(snap), libraryConstants(snap), request);
   } catch (e) {
-    if (e instanceof BuildError) throw new HttpError(422, 'validation_failed', `${e.field}: ${e.message}`, [{ path: e.field, message: e.message }]);
+    if (e instanceof BuildError) throw unprocessable(e.field, e.message);
     throw e;
   }
 }
 
-/** Solves a built system; engine input problems come back as 422 naming the field. */
+/** Solves a built system as the bath stands; engine input problems come back as 422 naming the field. */
 function solveOrExplain(built: BuildOutput, pH: number | undefined): SolveResultJson {
   try {
     const result = solveBuilt(built.problem, pH);
-    return { ...result, warnings: [...built.warnings, ...result.warnings] };
+    return jsonSafe({ ...result, warnings: [...built.warnings, ...result.warnings] }) as SolveResultJson;
   } catch (e) {
-    if (e instanceof CalculatorInputError) throw new HttpError(422, 'validation_failed', `${e.field}: ${e.message}`, [{ path: e.field, message: e.message }]);
+    if (e instanceof CalculatorInputError) throw unprocessable(e.field, e.message);
     throw e;
   }
 }
 
-function summaryOf(row: RunRow, authorName: string): RunSummary {
+/** Runs a calculator on a built system; its input problems are 422s under params (or system). */
+function calculate(calculator: CalculatorKey, rawParams: unknown, built: BuildOutput, pH: number | undefined): CalculationRun {
+  const params = PARAMS_SCHEMAS[calculator].parse(rawParams);
+  try {
+    const run = runCalculation(calculator, built.problem, pH, params as never);
+    return { ...run, warnings: [...built.warnings, ...run.warnings] };
+  } catch (e) {
+    if (e instanceof CalculatorInputError) {
+      const field = /^(totals|fixed|components|species|solids|state|system|pH)\b/.test(e.field) ? `system.${e.field.replace(/^(state|system)\./, '')}` : `params.${e.field}`;
+      throw unprocessable(field, e.message);
+    }
+    throw e;
+  }
+}
+
+function summaryOf(row: RunRow, authorName: string, bathName: string | null): RunSummary {
   return {
     id: row.id,
     title: row.title,
@@ -62,23 +88,25 @@ function summaryOf(row: RunRow, authorName: string): RunSummary {
     createdAt: row.createdAt.toISOString(),
     status: row.status as RunSummary['status'],
     usesDrafts: row.usesDrafts,
+    verdict: row.verdict,
+    bath: row.bathId ? { id: row.bathId, name: bathName ?? 'Unknown bath' } : null,
   };
 }
 
 /** A run with, for each constant it used, what has become of that lineage since. */
-async function runDetail(tx: Tx, row: RunRow, authorName: string): Promise<Run> {
+async function runDetail(tx: Tx, row: RunRow, authorName: string, bathName: string | null): Promise<Run> {
   const used = row.constantsUsed as ConstantUse[];
-  const lineageIds = [...new Set(used.map((c) => c.lineageId))];
-  const now = lineageIds.length ? await tx.select().from(constants) : [];
+  const now = used.length ? await tx.select().from(constants) : [];
   const byId = new Map(now.map((c) => [c.id, c]));
   const approvedByLineage = new Map(now.filter((c) => c.status === 'approved').map((c) => [c.lineageId, c]));
   return {
-    ...summaryOf(row, authorName),
+    ...summaryOf(row, authorName, bathName),
     inputs: row.inputs as Record<string, unknown>,
     problem: row.problem as Run['problem'],
     engineVersion: row.engineVersion,
     result: row.result as SolveResultJson,
     warnings: row.warnings as string[],
+    output: row.output ?? null,
     constants: used.map((c) => {
       const current = approvedByLineage.get(c.lineageId);
       return {
@@ -90,27 +118,72 @@ async function runDetail(tx: Tx, row: RunRow, authorName: string): Promise<Run> 
   };
 }
 
-async function authorName(tx: Tx, id: string): Promise<string> {
-  const [u] = await tx.select({ name: users.name }).from(users).where(eq(users.id, id));
+async function nameOf(tx: Tx, userId: string): Promise<string> {
+  const [u] = await tx.select({ name: users.name }).from(users).where(eq(users.id, userId));
   return u?.name ?? 'Unknown';
 }
 
-/** POST /systems/build, and saved runs. */
+async function bathNameOf(tx: Tx, bathId: string | null): Promise<string | null> {
+  if (!bathId) return null;
+  const [b] = await tx.select({ name: baths.name }).from(baths).where(eq(baths.id, bathId));
+  return b?.name ?? null;
+}
+
+/** Engine input problems as 400s naming the field of the problem. */
+function solveProblem(problem: unknown, prefix: string): unknown {
+  try {
+    return jsonSafe(solve(problem as Problem));
+  } catch (e) {
+    if (e instanceof EngineInputError) {
+      const field = `${prefix}${e.field}`;
+      const message = e.message.slice(e.field.length + 2);
+      throw new HttpError(400, 'validation_failed', `${field}: ${message}`, [{ path: field, message }]);
+    }
+    throw e;
+  }
+}
+
+/** POST /solve, POST /calculations, POST /systems/build, and saved runs. */
 export function runsRouter(ctx: AuthContext): Router {
   const router = Router();
   const db = ctx.db;
+
+  router.post('/solve', signedIn, (req: Request, res: Response) => {
+    const body: unknown = req.body;
+    if (Array.isArray(body)) {
+      if (body.length === 0 || body.length > SOLVE_BATCH_LIMIT) {
+        throw new HttpError(400, 'validation_failed', `problems: send 1 to ${SOLVE_BATCH_LIMIT} problems in the array`, [{ path: '', message: `send 1 to ${SOLVE_BATCH_LIMIT} problems` }]);
+      }
+      res.json(body.map((p, i) => solveProblem(p, `${i}.`)));
+      return;
+    }
+    if (typeof body !== 'object' || body === null) {
+      throw new HttpError(400, 'validation_failed', 'problem: send a problem in the general form: {components, totals, fixed, species, solids, activity}', [{ path: '', message: 'send a problem object' }]);
+    }
+    res.json(solveProblem(body, ''));
+  });
 
   router.post('/systems/build', signedIn, async (req: Request, res: Response) => {
     const request = systemRequestSchema.parse(req.body);
     res.json(await buildFromLibrary(db, request));
   });
 
+  router.post('/calculations', signedIn, async (req: Request, res: Response) => {
+    const request = calculationRequestSchema.parse(req.body);
+    const built = await buildFromLibrary(db, request.system);
+    const run = calculate(request.calculator, request.params, built, request.system.pH);
+    res.json(output(calculationOutcomeSchema, run));
+  });
+
   router.post('/runs', allow('chemist', 'technician'), async (req: Request, res: Response) => {
     const user = requireUser(res);
     const input = runInputSchema.parse(req.body);
     const run = await db.transaction(async (tx) => {
+      const bathName = await bathNameOf(tx, input.bathId ?? null);
+      if (input.bathId && bathName === null) throw unprocessable('bathId', 'there is no such bath');
       const built = await buildFromLibrary(tx, input.system);
       const result = solveOrExplain(built, input.system.pH);
+      const outcome = calculate(input.calculator, input.params, built, input.system.pH);
       const id = randomUUID();
       const [row] = await tx
         .insert(runs)
@@ -118,15 +191,18 @@ export function runsRouter(ctx: AuthContext): Router {
           id,
           title: input.title,
           calculator: input.calculator,
-          inputs: input.system as SystemRequest as Record<string, unknown>,
+          inputs: { system: input.system, params: input.params, ...(input.bathId ? { bathId: input.bathId } : {}) },
           problem: built.problem,
           result,
           warnings: built.warnings,
           constantsUsed: built.constants,
           engineVersion: ENGINE_VERSION,
-          status: result.status,
+          status: outcome.status === 'converged' && result.status === 'converged' ? 'converged' : 'not_converged',
           usesDrafts: built.drafts.length > 0,
           authorId: user.id,
+          bathId: input.bathId ?? null,
+          verdict: outcome.verdict,
+          output: outcome.result ?? null,
         })
         .returning();
       if (!row) throw new Error('run not stored');
@@ -135,22 +211,30 @@ export function runsRouter(ctx: AuthContext): Router {
         actor: user.id,
         action: 'run.saved',
         subject: `run:${id}`,
-        payload: { calculator: input.calculator, constants: built.constants.map((c) => c.id), drafts: built.drafts.map((c) => c.id), status: result.status },
+        payload: { calculator: input.calculator, bath: input.bathId ?? null, constants: built.constants.map((c) => c.id), drafts: built.drafts.map((c) => c.id), status: row.status },
       });
-      return runDetail(tx, row, user.name);
+      return runDetail(tx, row, user.name, bathName);
     });
-    res.status(201).json(run);
+    res.status(201).json(output(runSchema, run));
   });
 
-  router.get('/runs', signedIn, async (_req: Request, res: Response) => {
+  router.get('/runs', signedIn, async (req: Request, res: Response) => {
+    const q = runQuerySchema.parse(req.query);
+    const where: SQL[] = [isNull(runs.deletedAt)];
+    if (q.bath) where.push(eq(runs.bathId, q.bath));
+    if (q.calculator) where.push(eq(runs.calculator, q.calculator));
+    if (q.author) where.push(eq(runs.authorId, q.author));
+    if (q.from) where.push(gte(runs.createdAt, new Date(`${q.from}T00:00:00Z`)));
+    if (q.to) where.push(lt(runs.createdAt, new Date(new Date(`${q.to}T00:00:00Z`).getTime() + 86_400_000)));
     const rows = await db
-      .select({ run: runs, name: users.name })
+      .select({ run: runs, name: users.name, bathName: baths.name })
       .from(runs)
       .innerJoin(users, eq(users.id, runs.authorId))
-      .where(isNull(runs.deletedAt))
+      .leftJoin(baths, eq(baths.id, runs.bathId))
+      .where(and(...where))
       .orderBy(desc(runs.createdAt))
       .limit(RUN_LIST_LIMIT);
-    res.json(rows.map((r) => summaryOf(r.run, r.name)));
+    res.json(output(runListSchema, rows.map((r) => summaryOf(r.run, r.name, r.bathName))));
   });
 
   router.get('/runs/:id', signedIn, async (req: Request, res: Response) => {
@@ -161,7 +245,27 @@ export function runsRouter(ctx: AuthContext): Router {
       .from(runs)
       .where(and(eq(runs.id, parsed.data), isNull(runs.deletedAt)));
     if (!row) throw new HttpError(404, 'not_found', `No run with id ${parsed.data}.`);
-    res.json(await runDetail(db, row, await authorName(db, row.authorId)));
+    res.json(output(runSchema, await runDetail(db, row, await nameOf(db, row.authorId), await bathNameOf(db, row.bathId))));
+  });
+
+  router.delete('/runs/:id', signedIn, async (req: Request, res: Response) => {
+    const user = requireUser(res);
+    const parsed = runIdParam.safeParse(req.params.id);
+    if (!parsed.success) throw new HttpError(404, 'not_found', `No run with id ${String(req.params.id)}.`);
+    await db.transaction(async (tx) => {
+      const [row] = await tx
+        .select()
+        .from(runs)
+        .where(and(eq(runs.id, parsed.data), isNull(runs.deletedAt)))
+        .for('update');
+      if (!row) throw new HttpError(404, 'not_found', `No run with id ${parsed.data}.`);
+      if (row.authorId !== user.id && !user.roles.includes('admin')) {
+        throw new HttpError(403, 'forbidden', 'Only the author of a run, or an admin, can delete it.');
+      }
+      await tx.update(runs).set({ deletedAt: new Date(), deletedBy: user.id }).where(eq(runs.id, row.id));
+      await writeAudit(tx, { actor: user.id, action: 'run.deleted', subject: `run:${row.id}`, payload: { title: row.title, calculator: row.calculator } });
+    });
+    res.status(204).end();
   });
 
   return router;
