@@ -58,4 +58,17 @@ describe('the demo baths', () => {
     expect(pdf.status).toBe(200);
     expect((pdf.body as Buffer).subarray(0, 8).toString('latin1')).toBe('%PDF-1.4');
   });
+
+  it('carry the demo runs a chemist and a technician saved from their latest analyses', async () => {
+    const agent = t.agent();
+    await signIn(agent, 'chemist@ligandry.test', DEMO_PASSWORD);
+    const silver = list.find((b) => b.name === 'Bright silver, line 2') as Summary;
+    const onSilver = (await agent.get('/api/runs').query({ bath: silver.id })).body as { calculator: string; status: string; verdict: string }[];
+    expect(onSilver.map((r) => r.calculator).sort()).toEqual(['curves', 'headroom', 'speciation']);
+    expect(onSilver.every((r) => r.status === 'converged' && r.verdict.length > 10)).toBe(true);
+    const fixer = list.find((b) => b.name === 'Fixer tank A, radiography') as Summary;
+    const onFixer = (await agent.get('/api/runs').query({ bath: fixer.id })).body as { calculator: string; verdict: string }[];
+    expect(onFixer.map((r) => r.calculator)).toEqual(['fixer_loading']);
+    expect(onFixer[0]?.verdict).toMatch(/loading/);
+  });
 });

@@ -5,13 +5,15 @@ import { auditLog } from '@/db/schema';
 import fs from 'node:fs/promises';
 
 import { seedBaths } from '@/db/seed/baths';
+import { seedLibrary } from '@/db/seed/library';
+import { seedRuns } from '@/db/seed/runs';
 import { seedTeam } from '@/db/seed/team';
 
 /**
  * Version of the demo data set. Raise it when a feature adds demo records; each version is
  * applied once per database, so `npm start` can run the seed on every start.
  */
-export const DEMO_SEED_VERSION = 3;
+export const DEMO_SEED_VERSION = 4;
 
 // Arbitrary constant for pg_advisory_xact_lock, so two starts at once do not both seed.
 const SEED_LOCK_KEY = 4_711_001;
@@ -21,13 +23,15 @@ export type SeedResult = { applied: boolean; version: number; production?: boole
 
 /**
  * Seeds the demo shop once per seed version, in one transaction: the demo team (one account per
- * role), the demo baths with their analyses and a lab report (v3), then a record of the seed in the audit log. Feature seeds (constants, baths, runs) join
+ * role), the demo baths with their analyses and a lab report (v3), demo runs on them (v4), then a record of the seed in the audit log. Feature seeds (constants, baths, runs) join
  * this transaction as they are built. Never with NODE_ENV=production: demo accounts share a
  * published password.
  */
 export async function seedDemo(db: Db, uploadsDir: string): Promise<SeedResult> {
   if (process.env.NODE_ENV === 'production') return { applied: false, version: DEMO_SEED_VERSION, production: true };
   const written: string[] = [];
+  // Demo runs are built from the constants library: load it first (a no-op when it is there).
+  await seedLibrary(db);
   try {
     return await seedDemoOnce(db, uploadsDir, written);
   } catch (err) {
@@ -51,11 +55,12 @@ async function seedDemoOnce(db: Db, uploadsDir: string, written: string[]): Prom
     const team = await seedTeam(tx);
     const demoBaths = await seedBaths(tx, uploadsDir);
     written.push(...demoBaths.files);
+    const demoRuns = await seedRuns(tx);
     await tx.insert(auditLog).values({
       actor: 'system:seed',
       action: 'demo.seeded',
       subject: 'shop:demo',
-      payload: { version: String(DEMO_SEED_VERSION), shop: 'Harbourside Finishing (invented demo shop)', accountsAdded: team, bathsAdded: demoBaths.baths },
+      payload: { version: String(DEMO_SEED_VERSION), shop: 'Harbourside Finishing (invented demo shop)', accountsAdded: team, bathsAdded: demoBaths.baths, runsAdded: demoRuns },
     });
     return { applied: true, version: DEMO_SEED_VERSION };
   });

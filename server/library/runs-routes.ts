@@ -143,6 +143,45 @@ function solveProblem(problem: unknown, prefix: string): unknown {
   }
 }
 
+/** Builds, calculates and stores a run in `tx` (the route and the demo seed both use it). */
+export async function saveRun(tx: Tx, user: { id: string; name: string }, input: z.output<typeof runInputSchema>): Promise<Run> {
+  const bathName = await bathNameOf(tx, input.bathId ?? null);
+  if (input.bathId && bathName === null) throw unprocessable('bathId', 'there is no such bath');
+  const built = await buildFromLibrary(tx, input.system);
+  const result = solveOrExplain(built, input.system.pH);
+  const outcome = calculate(input.calculator, input.params, built, input.system.pH);
+  const id = randomUUID();
+  const [row] = await tx
+    .insert(runs)
+    .values({
+      id,
+      title: input.title,
+      calculator: input.calculator,
+      inputs: { system: input.system, params: input.params, ...(input.bathId ? { bathId: input.bathId } : {}) },
+      problem: built.problem,
+      result,
+      warnings: built.warnings,
+      constantsUsed: built.constants,
+      engineVersion: ENGINE_VERSION,
+      status: outcome.status === 'converged' && result.status === 'converged' ? 'converged' : 'not_converged',
+      usesDrafts: built.drafts.length > 0,
+      authorId: user.id,
+      bathId: input.bathId ?? null,
+      verdict: outcome.verdict,
+      output: outcome.result ?? null,
+    })
+    .returning();
+  if (!row) throw new Error('run not stored');
+  if (built.constants.length > 0) await tx.insert(runConstants).values(built.constants.map((c) => ({ runId: id, constantId: c.id })));
+  await writeAudit(tx, {
+    actor: user.id,
+    action: 'run.saved',
+    subject: `run:${id}`,
+    payload: { calculator: input.calculator, bath: input.bathId ?? null, constants: built.constants.map((c) => c.id), drafts: built.drafts.map((c) => c.id), status: row.status },
+  });
+  return runDetail(tx, row, user.name, bathName);
+}
+
 /** POST /solve, POST /calculations, POST /systems/build, and saved runs. */
 export function runsRouter(ctx: AuthContext): Router {
   const router = Router();
@@ -178,43 +217,7 @@ export function runsRouter(ctx: AuthContext): Router {
   router.post('/runs', allow('chemist', 'technician'), async (req: Request, res: Response) => {
     const user = requireUser(res);
     const input = runInputSchema.parse(req.body);
-    const run = await db.transaction(async (tx) => {
-      const bathName = await bathNameOf(tx, input.bathId ?? null);
-      if (input.bathId && bathName === null) throw unprocessable('bathId', 'there is no such bath');
-      const built = await buildFromLibrary(tx, input.system);
-      const result = solveOrExplain(built, input.system.pH);
-      const outcome = calculate(input.calculator, input.params, built, input.system.pH);
-      const id = randomUUID();
-      const [row] = await tx
-        .insert(runs)
-        .values({
-          id,
-          title: input.title,
-          calculator: input.calculator,
-          inputs: { system: input.system, params: input.params, ...(input.bathId ? { bathId: input.bathId } : {}) },
-          problem: built.problem,
-          result,
-          warnings: built.warnings,
-          constantsUsed: built.constants,
-          engineVersion: ENGINE_VERSION,
-          status: outcome.status === 'converged' && result.status === 'converged' ? 'converged' : 'not_converged',
-          usesDrafts: built.drafts.length > 0,
-          authorId: user.id,
-          bathId: input.bathId ?? null,
-          verdict: outcome.verdict,
-          output: outcome.result ?? null,
-        })
-        .returning();
-      if (!row) throw new Error('run not stored');
-      if (built.constants.length > 0) await tx.insert(runConstants).values(built.constants.map((c) => ({ runId: id, constantId: c.id })));
-      await writeAudit(tx, {
-        actor: user.id,
-        action: 'run.saved',
-        subject: `run:${id}`,
-        payload: { calculator: input.calculator, bath: input.bathId ?? null, constants: built.constants.map((c) => c.id), drafts: built.drafts.map((c) => c.id), status: row.status },
-      });
-      return runDetail(tx, row, user.name, bathName);
-    });
+    const run = await db.transaction((tx) => saveRun(tx, user, input));
     res.status(201).json(output(runSchema, run));
   });
 
