@@ -1,0 +1,50 @@
+// A calculator's system from a bath's latest analysis: the totals, the estimate of total ligand
+// when only free ligand was titrated, the counter-ion for the ionic strength, and what is missing.
+import { latestAnalysis, prefillFromBath } from '@/lib/baths/prefill';
+import type { Analysis, Bath } from '@/shared/baths';
+
+const bath = {
+  metal: 'Ag+',
+  ligand: 'CN-',
+  ligandAs: 'KCN',
+  extras: ['carbonate'],
+  temperatureC: 22,
+} as unknown as Bath;
+
+function analysis(sampledAt: string, values: Partial<Analysis['values']>): Analysis {
+  return {
+    id: sampledAt,
+    bathId: 'b',
+    sampledAt,
+    analyst: 'A',
+    values: { metal: null, freeLigand: null, totalLigand: null, pH: null, carbonate: null, bromide: null, ...values },
+    entered: {},
+    notes: '',
+    source: 'manual',
+    enteredBy: { id: 'u', name: 'U' },
+    createdAt: sampledAt,
+    outOfRange: [],
+  };
+}
+
+describe('prefillFromBath', () => {
+  it('takes the newest analysis and estimates total cyanide as free + 2 per silver', () => {
+    const older = analysis('2026-10-01T12:00:00.000Z', { metal: 0.2, freeLigand: 1.5, pH: 12 });
+    const newer = analysis('2026-11-01T12:00:00.000Z', { metal: 0.3, freeLigand: 1.8, pH: 12.2 });
+    expect(latestAnalysis([newer, older])).toBe(newer);
+    const { system, notes } = prefillFromBath(bath, [older, newer]);
+    // Ag(CN)2-: 0.3 M silver holds 0.6 M cyanide; total = 1.8 + 0.6 = 2.4 M; K+ one per CN- from KCN.
+    expect(system).toMatchObject({ metals: ['Ag+'], ligands: ['CN-'], counterIons: ['K+'], pH: 12.2, temperatureC: 22 });
+    expect(system.totals?.['CN-']).toBeCloseTo(2.4, 12);
+    expect(system.totals?.['K+']).toBeCloseTo(2.4, 12);
+    expect(notes.join(' ')).toMatch(/estimated as free \+ 2 per Ag\+/);
+  });
+
+  it('uses an analysed total when there is one, and says what is missing', () => {
+    const { system, notes } = prefillFromBath(bath, [analysis('2026-11-01T12:00:00.000Z', { metal: 0.3, totalLigand: 2.0 })]);
+    expect(system.totals?.['CN-']).toBe(2.0);
+    expect(system.pH).toBeUndefined();
+    expect(notes.join(' ')).toMatch(/No pH was analysed/);
+    expect(prefillFromBath(bath, []).notes.join(' ')).toMatch(/no analyses yet/);
+  });
+});
