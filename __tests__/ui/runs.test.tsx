@@ -1,15 +1,19 @@
-import { Dimensions } from 'react-native';
-import { fireEvent, renderRouter, screen, within } from 'expo-router/testing-library';
+import { Dimensions, Platform, Share } from 'react-native';
+import { act, fireEvent, renderRouter, screen, waitFor, within } from 'expo-router/testing-library';
 
-import { errorBody, mockApi, type Routes } from './helpers';
+import { type BathSummary } from '@/shared/baths';
+
+import { admin, errorBody, mockApi, sentBodies, type Routes } from './helpers';
 
 const phone = Dimensions.get('window');
+const wideWindow = { width: 1280, height: 800, scale: 1, fontScale: 1 };
 const cora = { id: 'u-chem', name: 'Cora Quill' };
 const theo = { id: 'u-tech', name: 'Theo Bench' };
+const fixerBath = { id: 'bath-fix', name: 'Fixer tank 2' };
 
 const summaries = [
-  { id: 'run-2', title: 'Fixer tank 2, after top-up', calculator: 'speciation', author: theo, createdAt: '2026-03-04T09:00:00.000Z', status: 'converged', usesDrafts: true, verdict: 'Silver is held mostly as Ag(S2O3)2-3 (> 99 %); no solid forms.', bath: null },
-  { id: 'run-1', title: '', calculator: 'speciation', author: cora, createdAt: '2026-03-01T15:30:00.000Z', status: 'not_converged', usesDrafts: false, verdict: '', bath: null },
+  { id: 'run-2', title: 'Fixer tank 2, after top-up', calculator: 'speciation', author: theo, createdAt: '2026-03-04T09:00:00.000Z', status: 'converged', usesDrafts: true, verdict: 'Silver is held mostly as Ag(S2O3)2-3 (> 99 %); no solid forms.', bath: fixerBath },
+  { id: 'run-1', title: '', calculator: 'headroom', author: cora, createdAt: '2026-03-01T15:30:00.000Z', status: 'not_converged', usesDrafts: false, verdict: '', bath: null },
 ];
 
 // Silver chloride in dilute ammonia, as the server stored it when the run was saved.
@@ -48,13 +52,10 @@ const constant = (id: number, version: number, reaction: string, logValue: numbe
   temperatureC: 25,
   source: 'Handbook table 4, 2004',
 });
+const system = { metals: ['Ag+'], ligands: ['Cl-', 'NH3'], counterIons: [], totals: problem.totals, pH: 9.5, activity: 'davies', includeDrafts: true };
 const run = {
   ...summaries[0],
-  inputs: {
-    title: 'Fixer tank 2, after top-up',
-    calculator: 'speciation',
-    system: { metals: ['Ag+'], ligands: ['Cl-', 'NH3'], counterIons: [], totals: problem.totals, pH: 9.5, activity: 'davies', includeDrafts: true },
-  },
+  inputs: { system, params: {}, bathId: fixerBath.id },
   problem,
   engineVersion: '1.2.0',
   result,
@@ -65,6 +66,54 @@ const run = {
   warnings: ['Uses 1 draft not yet reviewed.'],
   output: null,
 };
+// Cora's own headroom run: her chemist account may delete it.
+const headroomRun = {
+  ...summaries[1],
+  title: 'AgCl headroom',
+  status: 'converged',
+  verdict: 'The bath takes 0.012 mol/L more AgCl(s) before a solid persists.',
+  inputs: { system, params: { solid: 'AgCl(s)' } },
+  problem,
+  engineVersion: '1.2.0',
+  result,
+  constants: [],
+  warnings: [],
+  output: null,
+};
+function bath(extra: Partial<BathSummary>): BathSummary {
+  return {
+    id: 'bath-fix',
+    name: 'Fixer tank 2',
+    process: 'cyanide_silver_plate',
+    status: 'active',
+    volume: 120,
+    volumeUnit: 'L',
+    volumeL: 120,
+    temperatureC: 25,
+    makeUp: [],
+    metal: 'Ag+',
+    ligand: 'CN-',
+    metalUnit: 'g/L',
+    ligandUnit: 'g/L',
+    ligandAs: 'KCN',
+    carbonateAs: null,
+    extras: [],
+    targets: { metal: { min: null, max: null }, freeLigand: { min: null, max: null }, pH: { min: null, max: null } },
+    site: '',
+    owner: cora,
+    notes: '',
+    createdBy: cora,
+    createdAt: '2026-02-01T10:00:00.000Z',
+    updatedAt: '2026-02-01T10:00:00.000Z',
+    archivedAt: null,
+    analysisCount: 0,
+    lastAnalysisAt: null,
+    lastAnalysisAgeDays: null,
+    outOfRange: [],
+    ...extra,
+  };
+}
+const baths = [bath({}), bath({ id: 'bath-old', name: 'Old silver line', status: 'archived', archivedAt: '2026-02-20T10:00:00.000Z' })];
 
 function open(url: string, routes: Routes) {
   const fetchMock = mockApi(routes);
@@ -72,11 +121,21 @@ function open(url: string, routes: Routes) {
   return { fetchMock, view };
 }
 
+function makeWide() {
+  Dimensions.set({ window: wideWindow, screen: wideWindow });
+}
+
+/** The GET paths asked for so far. */
+function gets(fetchMock: jest.Mock): string[] {
+  return fetchMock.mock.calls.filter(([, init]) => ((init as RequestInit | undefined)?.method ?? 'GET') === 'GET').map(([p]) => p as string);
+}
+
 afterEach(() => {
   Dimensions.set({ window: phone, screen: phone });
+  jest.restoreAllMocks();
 });
 
-describe('Saved runs', () => {
+describe('Saved runs list', () => {
   it('shows loading, then an error with retry', async () => {
     open('/calculate/runs', { '/api/runs': 'pending' });
     expect(await screen.findByText('Loading saved runs…')).toBeOnTheScreen();
@@ -90,33 +149,101 @@ describe('Saved runs', () => {
   it('says when nothing has been saved yet', async () => {
     open('/calculate/runs', { '/api/runs': { status: 200, body: [] } });
     expect(await screen.findByText('No saved runs yet')).toBeOnTheScreen();
-    expect(screen.getByRole('link', { name: 'Open speciation' })).toBeOnTheScreen();
+    expect(screen.getByRole('link', { name: 'Open the calculators' })).toBeOnTheScreen();
   });
 
-  it('lists runs newest first with author, status and a drafts marker', async () => {
+  it('lists runs newest first with calculator, bath, author, status, drafts and the verdict on one line', async () => {
     open('/calculate/runs', { '/api/runs': { status: 200, body: [...summaries].reverse() } });
     const links = await screen.findAllByRole('link', { name: /Fixer tank 2|Untitled run/ });
     expect(links.map((l) => l.props.accessibilityLabel)).toEqual(['Fixer tank 2, after top-up', 'Untitled run']);
+    expect(screen.getByText('2 runs')).toBeOnTheScreen();
     const first = within(screen.getByTestId('run-run-2'));
     expect(first.getByText(/Speciation · Theo Bench · /)).toBeOnTheScreen();
+    expect(first.getByText('Bath: Fixer tank 2')).toBeOnTheScreen();
     expect(first.getByText('Settled')).toBeOnTheScreen();
     expect(first.getByText('Uses drafts')).toBeOnTheScreen();
+    expect(screen.getByTestId('run-run-2-verdict')).toHaveProp('numberOfLines', 1);
+    expect(screen.getByTestId('run-run-2')).toHaveProp('accessibilityHint', expect.stringContaining('no solid forms'));
     const second = within(screen.getByTestId('run-run-1'));
+    expect(second.getByText(/Headroom · Cora Quill · /)).toBeOnTheScreen();
     expect(second.getByText('Did not settle')).toBeOnTheScreen();
     expect(second.queryByText('Uses drafts')).toBeNull();
+    expect(second.queryByText(/^Bath:/)).toBeNull();
   });
 
-  it('opens a run with its inputs, stored result and the versions it used', async () => {
+  it('reads its filters from the link and sends them', async () => {
+    const path = '/api/runs?author=u-chem&calculator=headroom&from=2026-03-01&to=2026-03-31';
+    const { fetchMock } = open('/calculate/runs?calculator=headroom&author=mine&from=2026-03-01&to=2026-03-31', {
+      [path]: { status: 200, body: [summaries[1]] },
+    });
+    expect(await screen.findByText('Untitled run')).toBeOnTheScreen();
+    expect(gets(fetchMock)).toContain(path);
+    expect(gets(fetchMock)).not.toContain('/api/runs');
+    expect(screen.getByRole('radio', { name: 'Mine' })).toBeChecked();
+    expect(screen.getByRole('button', { name: 'Show filters, 4 on' })).toBeOnTheScreen();
+  });
+
+  it('narrows by who saved, calculator, bath and dates, and says when nothing matches', async () => {
+    makeWide();
+    const { fetchMock } = open('/calculate/runs', {
+      '/api/runs': { status: 200, body: summaries },
+      '/api/runs?author=u-chem': { status: 200, body: [summaries[1]] },
+      '/api/runs?author=u-chem&calculator=headroom': { status: 200, body: [summaries[1]] },
+      '/api/runs?author=u-chem&bath=bath-old&calculator=headroom': { status: 200, body: [] },
+      '/api/runs?author=u-chem&bath=bath-old&calculator=headroom&from=2026-03-02': { status: 200, body: [] },
+      '/api/baths?status=all': { status: 200, body: baths },
+    });
+    expect(await screen.findByText('2 runs')).toBeOnTheScreen();
+    fireEvent.press(screen.getByRole('radio', { name: 'Mine' }));
+    expect(await screen.findByText('1 run')).toBeOnTheScreen();
+    fireEvent.press(screen.getByRole('radio', { name: 'Headroom' }));
+    await waitFor(() => expect(gets(fetchMock)).toContain('/api/runs?author=u-chem&calculator=headroom'));
+    fireEvent.press(await screen.findByRole('radio', { name: 'Old silver line (archived)' }));
+    expect(await screen.findByText('No runs match')).toBeOnTheScreen();
+
+    fireEvent.changeText(screen.getByLabelText('From'), '2026-3-2');
+    expect(await screen.findByText('Write the date as YYYY-MM-DD, for example 2026-03-01.')).toBeOnTheScreen();
+    expect(gets(fetchMock).some((p) => p.includes('from='))).toBe(false);
+    fireEvent.changeText(screen.getByLabelText('From'), '2026-03-02');
+    await waitFor(() => expect(gets(fetchMock)).toContain('/api/runs?author=u-chem&bath=bath-old&calculator=headroom&from=2026-03-02'));
+    expect(screen.queryByText(/Write the date as/)).toBeNull();
+
+    // One in the filters, one in the "no match" box.
+    expect(screen.getAllByRole('button', { name: 'Clear filters' })).toHaveLength(2);
+    fireEvent.press(screen.getAllByRole('button', { name: 'Clear filters' })[1]!);
+    expect(await screen.findByText('2 runs')).toBeOnTheScreen();
+    expect(screen.getByRole('radio', { name: 'Everyone' })).toBeChecked();
+  });
+
+  it('folds the filters away on a phone', async () => {
+    open('/calculate/runs', { '/api/runs': { status: 200, body: summaries }, '/api/baths?status=all': { status: 200, body: baths } });
+    expect(await screen.findByText('2 runs')).toBeOnTheScreen();
+    expect(screen.queryByRole('radio', { name: 'Headroom' })).toBeNull();
+    fireEvent.press(screen.getByRole('button', { name: 'Show filters' }));
+    expect(screen.getByRole('radio', { name: 'Headroom' })).toBeOnTheScreen();
+    expect(await screen.findByRole('radio', { name: 'Fixer tank 2' })).toBeOnTheScreen();
+  });
+});
+
+describe('Saved run', () => {
+  it('opens a run with its verdict, inputs, stored result, model notes and the versions it used', async () => {
     const { view } = open('/calculate/runs', { '/api/runs': { status: 200, body: summaries }, '/api/runs/run-2': { status: 200, body: run } });
     fireEvent.press(await screen.findByTestId('run-run-2'));
     expect(await screen.findByText(/Speciation · by Theo Bench · .* · engine 1\.2\.0/)).toBeOnTheScreen();
     expect(view.getPathname()).toBe('/calculate/runs/run-2');
+    expect(screen.getByRole('link', { name: 'Bath Fixer tank 2' })).toBeOnTheScreen();
+    expect(within(screen.getByTestId('run-verdict')).getByText('Silver is held mostly as Ag(S2O3)2-3 (> 99 %); no solid forms.')).toBeOnTheScreen();
     const inputs = within(screen.getByTestId('run-inputs'));
     expect(inputs.getByText(/Ligands: Cl-, NH3/)).toBeOnTheScreen();
     expect(inputs.getByText(/pH: 9\.5/)).toBeOnTheScreen();
     expect(inputs.getByText(/Drafts waiting for review were allowed/)).toBeOnTheScreen();
+    expect(inputs.getByText('None beyond the system.')).toBeOnTheScreen();
     expect(screen.getByText('Silver is held mostly as Ag(NH3)2+ (53 %); AgCl(s) (47 % of the silver) is present as a solid.')).toBeOnTheScreen();
-    expect(screen.getByText('Uses 1 draft not yet reviewed.')).toBeOnTheScreen();
+    const notes = within(screen.getByTestId('model-notes'));
+    expect(notes.getByText(/Activity model: Davies .* at 25 °C/)).toBeOnTheScreen();
+    expect(notes.getByText(/Ionic strength: 0\.00531 mol\/L/)).toBeOnTheScreen();
+    expect(notes.getByText(/Solver: settled after 8 iterations/)).toBeOnTheScreen();
+    expect(notes.getByText('Uses 1 draft not yet reviewed.')).toBeOnTheScreen();
     const replaced = within(screen.getByTestId('constant-31'));
     expect(replaced.getByText(/v1 · log β 7\.23/)).toBeOnTheScreen();
     expect(replaced.getByText('v1 (log β 7.23) — since replaced by v2 (log β 7.40)')).toBeOnTheScreen();
@@ -127,6 +254,17 @@ describe('Saved runs', () => {
     expect(kept.queryByText(/since replaced/)).toBeNull();
   });
 
+  it("puts the calculator's settings in words", async () => {
+    open('/calculate/runs/run-1', { '/api/runs/run-1': { status: 200, body: headroomRun } });
+    const settings = within(await screen.findByTestId('run-params'));
+    expect(settings.getByText('Headroom settings')).toBeOnTheScreen();
+    expect(settings.getByText(/Solid: AgCl\(s\)/)).toBeOnTheScreen();
+    expect(settings.getByText(/Metal counted: the first metal in the solid/)).toBeOnTheScreen();
+    // Saved before the headroom calculator kept its output: the bath's equilibrium stands in.
+    expect(screen.getByTestId('no-output')).toHaveTextContent(/headroom calculator kept its own result/);
+    expect(screen.getByTestId('speciation-result')).toBeOnTheScreen();
+  });
+
   it('says plainly when a run does not exist, without a retry', async () => {
     open('/calculate/runs/nope', { '/api/runs/nope': { status: 404, body: errorBody('not_found', 'No saved run with that id.') } });
     expect(await screen.findByText('No saved run with that id.')).toBeOnTheScreen();
@@ -134,9 +272,79 @@ describe('Saved runs', () => {
   });
 
   it('puts the inputs beside the result tables on a wide screen', async () => {
-    Dimensions.set({ window: { width: 1280, height: 800, scale: 1, fontScale: 1 }, screen: { width: 1280, height: 800, scale: 1, fontScale: 1 } });
+    makeWide();
     open('/calculate/runs/run-2', { '/api/runs/run-2': { status: 200, body: run } });
     expect(await screen.findByText('Saturation index')).toBeOnTheScreen();
     expect(within(screen.getByTestId('solids-AgCl(s)')).getByText('0.00469')).toBeOnTheScreen();
+  });
+
+  it('shares its link, saying only the team can open it', async () => {
+    const share = jest.spyOn(Share, 'share').mockResolvedValue({ action: Share.sharedAction });
+    open('/calculate/runs/run-2', { '/api/runs/run-2': { status: 200, body: run } });
+    fireEvent.press(await screen.findByRole('button', { name: 'Copy share link' }));
+    const message = within(await screen.findByTestId('share-message'));
+    expect(message.getByText('Link shared.')).toBeOnTheScreen();
+    expect(message.getByText(/\/calculate\/runs\/run-2$/)).toBeOnTheScreen();
+    expect(share).toHaveBeenCalledWith(expect.objectContaining({ message: expect.stringMatching(/\/calculate\/runs\/run-2$/) }));
+    expect(screen.getByText('Only people on the team can open a share link: it asks them to sign in first.')).toBeOnTheScreen();
+  });
+
+  it('copies the link on the web, and shows it when the browser refuses the clipboard', async () => {
+    const writeText = jest.fn().mockResolvedValueOnce(undefined).mockRejectedValueOnce(new Error('denied'));
+    const before = Object.getOwnPropertyDescriptor(globalThis, 'navigator');
+    Object.defineProperty(globalThis, 'navigator', { value: { ...globalThis.navigator, clipboard: { writeText } }, configurable: true });
+    open('/calculate/runs/run-2', { '/api/runs/run-2': { status: 200, body: run } });
+    const button = await screen.findByRole('button', { name: 'Copy share link' });
+    jest.replaceProperty(Platform, 'OS', 'web');
+    await act(async () => fireEvent.press(button));
+    expect(writeText).toHaveBeenCalledWith(expect.stringMatching(/\/calculate\/runs\/run-2$/));
+    expect(await screen.findByText('Link copied.')).toBeOnTheScreen();
+    await act(async () => fireEvent.press(button));
+    expect(await screen.findByText('Copy this link:')).toBeOnTheScreen();
+    if (before) Object.defineProperty(globalThis, 'navigator', before);
+    else delete (globalThis as { navigator?: unknown }).navigator;
+  });
+
+  it('opens the print view', async () => {
+    const { view } = open('/calculate/runs/run-2', { '/api/runs/run-2': { status: 200, body: run } });
+    fireEvent.press(await screen.findByRole('button', { name: 'Print' }));
+    await waitFor(() => expect(view.getPathname()).toBe('/print/run/run-2'));
+  });
+
+  it("offers Delete only to the run's author or an admin", async () => {
+    open('/calculate/runs/run-2', { '/api/runs/run-2': { status: 200, body: run } });
+    expect(await screen.findByRole('button', { name: 'Copy share link' })).toBeOnTheScreen();
+    expect(screen.queryByRole('button', { name: /^Delete/ })).toBeNull();
+  });
+
+  it('deletes its own run after asking, and goes back to the list', async () => {
+    let deleted = false;
+    const { fetchMock, view } = open('/calculate/runs/run-1', {
+      '/api/runs/run-1': { status: 200, body: headroomRun },
+      'DELETE /api/runs/run-1': () => {
+        deleted = true;
+        return { status: 204 };
+      },
+      '/api/runs': () => ({ status: 200, body: deleted ? [summaries[0]] : summaries }),
+    });
+    fireEvent.press(await screen.findByRole('button', { name: 'Delete AgCl headroom' }));
+    expect(screen.getByText('Delete "AgCl headroom"? It leaves the saved runs for everyone on the team.')).toBeOnTheScreen();
+    fireEvent.press(screen.getByRole('button', { name: 'Delete the run' }));
+    await waitFor(() => expect(view.getPathname()).toBe('/calculate/runs'));
+    expect(sentBodies(fetchMock, 'DELETE', '/api/runs/run-1')).toHaveLength(1);
+    expect(await screen.findByText('1 run')).toBeOnTheScreen();
+    expect(screen.queryByTestId('run-run-1')).toBeNull();
+  });
+
+  it("shows the server's words when it refuses a delete", async () => {
+    open('/calculate/runs/run-2', {
+      '/api/me': { status: 200, body: admin },
+      '/api/runs/run-2': { status: 200, body: run },
+      'DELETE /api/runs/run-2': { status: 403, body: errorBody('forbidden', 'Only the author of a run, or an admin, can delete it.') },
+    });
+    fireEvent.press(await screen.findByRole('button', { name: 'Delete Fixer tank 2, after top-up' }));
+    fireEvent.press(screen.getByRole('button', { name: 'Delete the run' }));
+    expect(await screen.findByText('Only the author of a run, or an admin, can delete it.')).toBeOnTheScreen();
+    expect(screen.getByRole('button', { name: 'Delete Fixer tank 2, after top-up' })).toBeOnTheScreen();
   });
 });

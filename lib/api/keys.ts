@@ -31,6 +31,8 @@ export const keys = {
   proposals: '/api/constants',
   buildSystem: '/api/systems/build',
   runs: '/api/runs',
+  /** The runs list for a filter (bath, calculator, author, from, to); parameters left out when empty. */
+  runsQuery: (query: Record<string, string | undefined> = {}) => withQuery('/api/runs', query),
   run: (id: string) => `/api/runs/${encodeURIComponent(id)}`,
   baths: (query: Record<string, string | undefined> = {}) => withQuery('/api/baths', query),
   bathsCreate: '/api/baths',

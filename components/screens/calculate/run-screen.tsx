@@ -2,10 +2,12 @@ import { StyleSheet, View } from 'react-native';
 
 import { CautionNote } from '@/components/screens/calculate/caution-note';
 import { ConstantsUsed } from '@/components/screens/calculate/constants-used';
-import { RunInputs, runSystem } from '@/components/screens/calculate/run-inputs';
+import { RunInputs } from '@/components/screens/calculate/run-inputs';
 import { CALCULATOR_LABELS, runStatus, runTitle } from '@/components/screens/calculate/run-words';
-import { METAL_CHOICES } from '@/components/screens/calculate/speciation-summary';
-import { SpeciationResult } from '@/components/screens/calculate/speciation-result';
+import { ModelNotes } from '@/components/screens/runs/model-notes';
+import { RunActions } from '@/components/screens/runs/run-actions';
+import { RunResult } from '@/components/screens/runs/run-result';
+import { RunVerdict } from '@/components/screens/runs/run-verdict';
 import { space } from '@/components/theme/tokens';
 import { useIsWide } from '@/components/theme/use-is-wide';
 import { Card } from '@/components/ui/card';
@@ -14,43 +16,56 @@ import { formatWhen } from '@/components/ui/format-date';
 import { LoadingState } from '@/components/ui/loading-state';
 import { ScreenContainer } from '@/components/ui/screen-container';
 import { StatusPill } from '@/components/ui/status-dot';
+import { TextLink } from '@/components/ui/text-link';
 import { ThemedText } from '@/components/ui/themed-text';
 import { isClientError } from '@/lib/api/fetcher';
+import { useMe } from '@/lib/api/use-me';
 import { useRun } from '@/lib/api/use-runs';
 import { type Run } from '@/shared/constants';
 
 const BACK = { href: '/calculate/runs', label: 'Saved runs' } as const;
 
+function RunHead({ run }: { run: Run }) {
+  const status = runStatus(run.status);
+  return (
+    <View style={styles.head}>
+      <ThemedText variant="label" weight="regular" tone="textMuted">
+        {`${CALCULATOR_LABELS[run.calculator]} · by ${run.author.name} · ${formatWhen(run.createdAt)} · engine ${run.engineVersion}`}
+      </ThemedText>
+      {run.bath ? (
+        <View style={styles.bath}>
+          <ThemedText variant="label" weight="regular" tone="textMuted">
+            Bath:
+          </ThemedText>
+          <TextLink href={`/baths/${encodeURIComponent(run.bath.id)}`} label={run.bath.name} accessibilityLabel={`Bath ${run.bath.name}`} hint="Opens the bath's record" />
+        </View>
+      ) : null}
+      <View style={styles.pills}>
+        <StatusPill kind={status.kind} label={status.label} />
+        {run.usesDrafts ? <StatusPill kind="warn" label="Uses drafts" /> : null}
+      </View>
+      {run.usesDrafts ? <CautionNote message="This run used draft values that had not been reviewed when it was saved." /> : null}
+    </View>
+  );
+}
+
 function RunBody({ run }: { run: Run }) {
   const wide = useIsWide();
-  const status = runStatus(run.status);
-  const metals = runSystem(run.inputs)?.metals ?? run.problem.components.filter((c) => METAL_CHOICES.some((m) => m.formula === c));
+  const me = useMe().data;
   return (
     <>
-      <View style={styles.head}>
-        <ThemedText variant="label" weight="regular" tone="textMuted">
-          {`${CALCULATOR_LABELS[run.calculator]} · by ${run.author.name} · ${formatWhen(run.createdAt)} · engine ${run.engineVersion}`}
-        </ThemedText>
-        <View style={styles.pills}>
-          <StatusPill kind={status.kind} label={status.label} />
-          {run.usesDrafts ? <StatusPill kind="warn" label="Uses drafts" /> : null}
-        </View>
-        {run.usesDrafts ? <CautionNote message="This run used draft values that had not been reviewed when it was saved." /> : null}
-        {run.warnings.map((w) => (
-          <CautionNote key={w} message={w} />
-        ))}
-      </View>
+      <RunHead run={run} />
+      <RunVerdict verdict={run.verdict} />
+      <RunActions run={run} me={me} />
       <View style={wide ? styles.row : styles.stack}>
         <Card style={[styles.card, wide && styles.inputs]}>
-          <RunInputs inputs={run.inputs} />
+          <RunInputs inputs={run.inputs} calculator={run.calculator} />
         </Card>
         <View style={[styles.stack, wide && styles.results]}>
-          <ThemedText variant="title" accessibilityRole="header" aria-level={2}>
-            Result
-          </ThemedText>
-          <SpeciationResult problem={run.problem} result={run.result} metals={metals} />
+          <RunResult run={run} />
         </View>
       </View>
+      <ModelNotes run={run} />
       <ConstantsUsed
         constants={run.constants}
         note="The versions this run used, kept as they were. When a value has since been replaced, the run still shows the one it used."
@@ -59,7 +74,7 @@ function RunBody({ run }: { run: Run }) {
   );
 }
 
-/** One saved run: who and when, its inputs, the stored result and the constant versions it used. */
+/** One saved run: who and when, its verdict, inputs, the calculator's stored result, model notes and the constant versions it used. */
 export function RunScreen({ id }: { id: string }) {
   const { data, error, isLoading, mutate } = useRun(id);
   let body;
@@ -75,6 +90,7 @@ export function RunScreen({ id }: { id: string }) {
 
 const styles = StyleSheet.create({
   head: { gap: space.sm },
+  bath: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.xs },
   pills: { flexDirection: 'row', flexWrap: 'wrap', gap: space.xs },
   row: { flexDirection: 'row', alignItems: 'flex-start', gap: space.xl },
   stack: { gap: space.md, minWidth: 0 },

@@ -1,103 +1,74 @@
-import { Link } from 'expo-router';
-import { Pressable, StyleSheet, View, type ViewStyle } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 
-import { CALCULATOR_LABELS, runStatus, runTitle } from '@/components/screens/calculate/run-words';
+import { RunFilters } from '@/components/screens/runs/run-filters';
+import { RunRow } from '@/components/screens/runs/run-row';
+import { activeFilterCount, useRunFilter, type RunListState } from '@/components/screens/runs/use-run-filter';
 import { FlaskIcon } from '@/components/shell/icons';
-import { radius, space } from '@/components/theme/tokens';
-import { useTheme } from '@/components/theme/use-theme';
+import { space } from '@/components/theme/tokens';
+import { useIsWide } from '@/components/theme/use-is-wide';
+import { Button } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
 import { ErrorState } from '@/components/ui/error-state';
-import { formatWhen } from '@/components/ui/format-date';
 import { LoadingState } from '@/components/ui/loading-state';
 import { ScreenContainer } from '@/components/ui/screen-container';
-import { StatusPill } from '@/components/ui/status-dot';
 import { TextLink } from '@/components/ui/text-link';
 import { ThemedText } from '@/components/ui/themed-text';
-import { useFocusVisible } from '@/components/ui/use-focus-visible';
+import { useMe } from '@/lib/api/use-me';
 import { useRuns } from '@/lib/api/use-runs';
-import { type RunSummary } from '@/shared/constants';
 
-function RunRow({ run }: { run: RunSummary }) {
-  const { palette } = useTheme();
-  const focus = useFocusVisible();
-  const status = runStatus(run.status);
-  const title = runTitle(run);
-  const byline = `${CALCULATOR_LABELS[run.calculator]} · ${run.author.name} · ${formatWhen(run.createdAt)}`;
+type ResultsProps = { state: RunListState; wide: boolean; list: ReturnType<typeof useRuns>; onClear: () => void };
+
+function Results({ state, wide, list, onClear }: ResultsProps) {
+  const { data, error, isLoading, mutate } = list;
+  if (error) return <ErrorState message={error.message} onRetry={() => void mutate()} />;
+  // With keepPreviousData the last rows stay while a changed filter loads; the spinner is for the first load only.
+  if (!data) return <LoadingState label="Loading saved runs…" />;
+  if (data.length === 0) {
+    return activeFilterCount(state) > 0 ? (
+      <EmptyState Icon={FlaskIcon} title="No runs match" body="No saved run fits these filters.">
+        <Button label="Clear filters" onPress={onClear} />
+      </EmptyState>
+    ) : (
+      <EmptyState Icon={FlaskIcon} title="No saved runs yet" body="Work something out with a calculator and press Save run: it is kept here with the constant versions it used.">
+        <TextLink href="/calculate" label="Open the calculators" />
+      </EmptyState>
+    );
+  }
+  const newestFirst = [...data].sort((a, b) => b.createdAt.localeCompare(a.createdAt));
   return (
-    <Link href={`/calculate/runs/${encodeURIComponent(run.id)}`} asChild>
-      <Pressable
-        accessibilityRole="link"
-        accessibilityLabel={title}
-        accessibilityHint={`${byline}. ${status.label}${run.usesDrafts ? '. Uses drafts' : ''}`}
-        onFocus={focus.onFocus}
-        onBlur={focus.onBlur}
-        testID={`run-${run.id}`}
-        style={StyleSheet.flatten<ViewStyle>([
-          styles.row,
-          { borderColor: palette.border, backgroundColor: palette.surfaceRaised },
-          focus.ring(palette.primary),
-        ])}
-      >
-        <View style={styles.words}>
-          <ThemedText variant="label" tone="primary">
-            {title}
-          </ThemedText>
-          <ThemedText variant="caption" tone="textMuted">
-            {byline}
-          </ThemedText>
-          <View style={styles.pills}>
-            <StatusPill kind={status.kind} label={status.label} />
-            {run.usesDrafts ? <StatusPill kind="warn" label="Uses drafts" /> : null}
-          </View>
-        </View>
-        <ThemedText variant="title" tone="primary" aria-hidden>
-          ›
-        </ThemedText>
-      </Pressable>
-    </Link>
+    <View style={styles.list}>
+      <ThemedText variant="label" weight="regular" tone="textMuted" accessibilityLiveRegion="polite">
+        {isLoading ? 'Updating the list…' : data.length === 1 ? '1 run' : `${data.length} runs`}
+      </ThemedText>
+      <View style={styles.list} role="list" aria-label="Saved runs">
+        {newestFirst.map((run) => (
+          <RunRow key={run.id} run={run} wide={wide} />
+        ))}
+      </View>
+    </View>
   );
 }
 
-/** Saved runs, newest first, each opening its stored inputs, result and constant versions. */
+/** Saved runs of every calculator, newest first, filtered by who, bath, calculator and date; each opens its stored inputs and result. */
 export function RunsScreen() {
-  const { data, error, isLoading, mutate } = useRuns();
-  let body;
-  if (error) body = <ErrorState message={error.message} onRetry={() => void mutate()} />;
-  else if (isLoading || !data) body = <LoadingState label="Loading saved runs…" />;
-  else if (data.length === 0) {
-    body = (
-      <EmptyState Icon={FlaskIcon} title="No saved runs yet" body="Work out a speciation and press Save run: it is kept here with the constant versions it used.">
-        <TextLink href="/calculate/system" label="Open speciation" />
-      </EmptyState>
-    );
-  } else {
-    const newestFirst = [...data].sort((a, b) => b.createdAt.localeCompare(a.createdAt));
-    body = (
-      <View style={styles.list} role="list" aria-label="Saved runs">
-        {newestFirst.map((run) => (
-          <RunRow key={run.id} run={run} />
-        ))}
-      </View>
-    );
-  }
+  const me = useMe().data;
+  const wide = useIsWide();
+  const { state, filter, problems, update, clear } = useRunFilter(me?.id);
+  const list = useRuns(filter);
+  // A person or bath named by id in the link gets its name from the runs listed.
+  const author = state.author;
+  const names = {
+    person: typeof author === 'object' ? list.data?.find((r) => r.author.id === author.id)?.author.name : undefined,
+    bath: state.bath ? list.data?.find((r) => r.bath?.id === state.bath)?.bath?.name : undefined,
+  };
   return (
     <ScreenContainer title="Saved runs" subtitle="Every saved calculation, newest first." back={{ href: '/calculate', label: 'Calculate' }}>
-      {body}
+      <RunFilters state={state} problems={problems} onChange={update} onClear={clear} wide={wide} names={names} />
+      <Results state={state} wide={wide} list={list} onClear={clear} />
     </ScreenContainer>
   );
 }
 
 const styles = StyleSheet.create({
   list: { gap: space.sm },
-  row: {
-    flexDirection: 'row',
-    alignItems: 'center',
-    gap: space.md,
-    paddingHorizontal: space.md,
-    paddingVertical: space.sm,
-    borderRadius: radius.md,
-    borderWidth: 1,
-  },
-  words: { flex: 1, gap: space.xxs, minWidth: 0 },
-  pills: { flexDirection: 'row', flexWrap: 'wrap', gap: space.xs },
 });
