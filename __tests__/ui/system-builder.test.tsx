@@ -102,7 +102,7 @@ describe('Speciation from the library', () => {
     renderRouter('./app', { initialUrl: '/calculate' });
     expect(await screen.findByRole('link', { name: 'Open Speciation' })).toBeOnTheScreen();
     expect(screen.getByRole('link', { name: 'Saved runs' })).toBeOnTheScreen();
-    expect(screen.getAllByText('Not available yet')).toHaveLength(5);
+    expect(screen.getAllByText('Not available yet')).toHaveLength(3);
   });
 
   it('checks the inputs before asking the server', async () => {

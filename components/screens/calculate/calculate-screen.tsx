@@ -14,7 +14,7 @@ export function CalculateScreen() {
   return (
     <ScreenContainer
       title="Calculate"
-      subtitle="Equilibrium tools for solutions that hold metals as complex ions. Speciation runs in this build; the others are planned."
+      subtitle="Equilibrium tools for solutions that hold metals as complex ions. Those marked not available yet are planned."
     >
       <NavRow href="/calculate/runs" title="Saved runs" body="Calculations kept with the constant versions they used." />
       <View style={styles.grid}>

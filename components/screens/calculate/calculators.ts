@@ -3,13 +3,20 @@ import { type Href } from 'expo-router';
 /** One calculator: its name, the question it answers, and where it lives once it runs in this build. */
 export type CalculatorSpec = { key: string; name: string; description: string; href?: Href };
 
-/** The six calculators Ligandry plans, in the order a bath chemist tends to reach for them. */
+/** The calculators Ligandry plans, in the order a bath chemist tends to reach for them. */
 export const CALCULATORS: readonly CalculatorSpec[] = [
   {
     key: 'headroom',
     name: 'Headroom',
     description:
-      'How much more metal salt a bath will dissolve before a solid persists, such as how much more silver a fixer can carry.',
+      'How much more metal salt a bath will dissolve before a solid persists, such as how much more silver cyanide a plating bath can carry.',
+    href: '/calculate/headroom',
+  },
+  {
+    key: 'fixer-loading',
+    name: 'Fixer loading',
+    description: 'How much silver a thiosulfate fixer holds, how much more silver halide it can take, and how loaded it is.',
+    href: '/calculate/fixer-loading',
   },
   {
     key: 'speciation',
@@ -21,7 +28,8 @@ export const CALCULATORS: readonly CalculatorSpec[] = [
   {
     key: 'curves',
     name: 'Curves',
-    description: 'Sweep one input across a range and chart solubility and species along the way.',
+    description: 'Sweep one input across a range and chart solubility and species along the way, with the data as CSV.',
+    href: '/calculate/curves',
   },
   {
     key: 'precipitation-order',

@@ -85,6 +85,23 @@ export function useSystemForm() {
     return { ok: true, request };
   };
 
+  /** Replaces every input with a system request (a bath's prefill); the solids choice goes back to "all" unless it names some. */
+  const load = (request: SystemRequest) => {
+    setGroups({
+      metals: ordered('metals', request.metals),
+      ligands: ordered('ligands', request.ligands ?? []),
+      counterIons: ordered('counterIons', request.counterIons ?? []),
+    });
+    setTotals(Object.fromEntries(Object.entries(request.totals ?? {}).map(([k, v]) => [k, amountText(v)])));
+    setPH(request.pH === undefined ? '' : amountText(request.pH));
+    setTemperature(request.temperatureC === undefined ? '25' : amountText(request.temperatureC));
+    setActivity(request.activity ?? 'davies');
+    setIncludeDrafts(request.includeDrafts ?? false);
+    setSolids(request.solids ? [...request.solids] : null);
+    setErrors(NO_ERRORS);
+    touched();
+  };
+
   return {
     groups,
     chosen,
@@ -98,6 +115,7 @@ export function useSystemForm() {
     version,
     setErrors,
     toggle,
+    load,
     toRequest,
     knownFields: () => knownFields(chosen),
     setTotal: (formula: string, text: string) => {
@@ -133,6 +151,16 @@ export function useSystemForm() {
 
 /** The system builder's form state and actions. */
 export type SystemForm = ReturnType<typeof useSystemForm>;
+
+/** The formulas of a group in the builder's order, any the builder does not offer kept at the end. */
+function ordered(group: ComponentGroup, formulas: readonly string[]): string[] {
+  return [...ORDER[group].filter((f) => formulas.includes(f)), ...formulas.filter((f) => !ORDER[group].includes(f))];
+}
+
+/** A number as a person would type it: up to 6 significant figures, no trailing noise. */
+function amountText(value: number): string {
+  return Number.isFinite(value) ? String(Number(value.toPrecision(6))) : '';
+}
 
 function knownFields(chosen: readonly string[]): string[] {
   return [...FIXED_FIELDS, ...chosen.map((f) => `totals.${f}`)];
