@@ -1,6 +1,7 @@
 import { StyleSheet, View } from 'react-native';
 
 import { BathActions } from '@/components/screens/bath-detail/bath-actions';
+import { BathCalculations } from '@/components/screens/bath-detail/bath-calculations';
 import { targetLines } from '@/components/screens/bath-detail/bath-words';
 import { space } from '@/components/theme/tokens';
 import { Card } from '@/components/ui/card';
@@ -96,6 +97,7 @@ export function BathHeader({ bath, me }: { bath: Bath; me: User | undefined }) {
           </ThemedText>
         </>
       ) : null}
+      {bath.status === 'active' ? <BathCalculations bath={bath} /> : null}
       <BathActions bath={bath} me={me} />
     </Card>
   );

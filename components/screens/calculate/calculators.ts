@@ -23,7 +23,7 @@ export const CALCULATORS: readonly CalculatorSpec[] = [
     name: 'Speciation',
     description:
       'Where the metal and ligand sit at equilibrium: each complex, its share of the metal, and which solids are present or close to forming, from the reviewed constants in the library.',
-    href: '/calculate/system',
+    href: '/calculate/speciation',
   },
   {
     key: 'curves',
