@@ -37,7 +37,9 @@ export function useCalculation(form: SystemForm, bathId: string | null, opts: Op
   usePreviewBuild(form, (b) => setBuilt((now) => (now?.key === b.key ? now : b)));
 
   const base = { built: built?.built ?? null, form };
-  const params = typeof opts.params === 'function' ? opts.params(base) : opts.params;
+  const paramsFor = (b: typeof base) => (typeof opts.params === 'function' ? opts.params(b) : opts.params);
+  const paramsNow = paramsFor(base);
+  const params = paramsNow;
   const names: FieldNames = { system: form.knownFields(), params: opts.paramFields, paramField: opts.paramField };
   const key = `${form.version}|${JSON.stringify(params)}`;
 
@@ -47,7 +49,7 @@ export function useCalculation(form: SystemForm, bathId: string | null, opts: Op
   };
 
   /** The request and params to send, or false with the errors shown (unless quiet). */
-  const check = (quiet: boolean): Checked => {
+  const check = (quiet: boolean, params = paramsNow): Checked => {
     const sys = form.toRequest();
     const placed: PlacedErrors = { system: sys.ok ? NO_ERRORS : sys.errors, params: {} };
     let run: Record<string, unknown> | null = null;
@@ -86,7 +88,20 @@ export function useCalculation(form: SystemForm, bathId: string | null, opts: Op
     const quiet = live && !attempted;
     if (!live) setAttempted(true);
     const gen = ++generation.current;
-    const c = check(quiet);
+    let c = check(quiet);
+    if (!c.ok && !live && typeof opts.params === 'function') {
+      // Parameters that depend on the built system (a solid to offer, say) may be waiting for a
+      // build still on its way: build now from the system as entered, then check them again.
+      const sys = form.toRequest();
+      if (!sys.ok) return;
+      try {
+        const made = await buildFor(sys.request, true);
+        if (gen !== generation.current) return;
+        c = check(quiet, paramsFor({ built: made, form }));
+      } catch {
+        return;
+      }
+    }
     if (!c.ok) return;
     const current = () => gen === generation.current;
     setRunning(true);
