@@ -96,6 +96,13 @@ export const makeUpParamsSchema = z.object({
     name: z.string().trim().min(1, 'name the salt').max(60),
     formula: z.string().trim().max(60).optional(),
     stoich: z.record(z.string(), z.number()).refine((s) => Object.keys(s).length > 0, 'give what one mole of the salt brings'),
+    /** A liquid stock (aqueous ammonia): mass fraction of the salt and density; its volume counts as dilution. */
+    stock: z
+      .object({
+        massFraction: z.number({ error: 'enter the strength as a fraction' }).gt(0, 'must be more than 0').max(1, 'must be at most 1'),
+        densityKgPerL: z.number({ error: 'enter the density in kg/L' }).gt(0.5, 'must be more than 0.5 kg/L').max(3, 'must be at most 3 kg/L'),
+      })
+      .optional(),
   }),
   target: z.discriminatedUnion('kind', [
     z.object({ kind: z.literal('free'), component: formula, molPerL: positive('the target (mol/L)') }),

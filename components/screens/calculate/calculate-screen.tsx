@@ -9,12 +9,12 @@ import { StatusPill } from '@/components/ui/status-dot';
 import { TextLink } from '@/components/ui/text-link';
 import { ThemedText } from '@/components/ui/themed-text';
 
-/** Calculate section: the calculators that run (with a link), the planned ones marked as not yet available, and saved runs. */
+/** Calculate section: every calculator (with a link) and saved runs. */
 export function CalculateScreen() {
   return (
     <ScreenContainer
       title="Calculate"
-      subtitle="Equilibrium tools for solutions that hold metals as complex ions. Those marked not available yet are planned."
+      subtitle="Equilibrium tools for solutions that hold metals as complex ions, on the reviewed constants library. Start from a bath to fill in its latest analysis."
     >
       <NavRow href="/calculate/runs" title="Saved runs" body="Calculations kept with the constant versions they used." />
       <View style={styles.grid}>

@@ -35,15 +35,18 @@ export const CALCULATORS: readonly CalculatorSpec[] = [
     key: 'precipitation-order',
     name: 'Precipitation order',
     description: 'Which metal comes out of solution first as a precipitant is dosed into a mixed bath.',
+    href: '/calculate/precipitation-order',
   },
   {
     key: 'dosing-plan',
     name: 'Dosing plan',
     description: 'A sequence of additions, with the state of the solution after each step.',
+    href: '/calculate/dosing-plan',
   },
   {
     key: 'make-up',
     name: 'Make-up',
     description: 'How much salt to add to reach a target free-ligand level or a target headroom.',
+    href: '/calculate/make-up',
   },
 ];

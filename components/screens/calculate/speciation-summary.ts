@@ -27,6 +27,7 @@ export const LIGAND_CHOICES: readonly ComponentChoice[] = [
   { formula: 'Cl-', name: 'Chloride' },
   { formula: 'Br-', name: 'Bromide' },
   { formula: 'I-', name: 'Iodide' },
+  { formula: 'S-2', name: 'Sulfide' },
 ];
 
 /** Counter-ions offered by the system builder (they carry charge but form nothing here). */

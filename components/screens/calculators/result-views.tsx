@@ -5,8 +5,11 @@ import { type ComponentType } from 'react';
 
 import { SpeciationResult } from '@/components/screens/calculate/speciation-result';
 import { CurvesView } from '@/components/screens/calculators/curves/curves-view';
+import { DosingView } from '@/components/screens/calculators/dosing-plan/dosing-view';
 import { FixerLoadingView } from '@/components/screens/calculators/fixer-loading/fixer-loading-view';
 import { HeadroomView } from '@/components/screens/calculators/headroom/headroom-view';
+import { MakeUpView } from '@/components/screens/calculators/make-up/make-up-view';
+import { PrecipitationView } from '@/components/screens/calculators/precipitation-order/precipitation-view';
 import { type CalculatorKey } from '@/shared/calculators';
 import { type ProblemJson, type SolveResultJson } from '@/shared/constants';
 
@@ -34,6 +37,9 @@ export const RESULT_VIEWS: Partial<Record<CalculatorKey, ComponentType<ResultVie
   headroom: HeadroomView,
   fixer_loading: FixerLoadingView,
   curves: CurvesView,
+  precipitation_order: PrecipitationView,
+  dosing_plan: DosingView,
+  make_up: MakeUpView,
 };
 
 /** The view for a calculator, or the speciation tables when it has none of its own. */
