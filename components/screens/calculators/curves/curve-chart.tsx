@@ -93,7 +93,8 @@ function Legend({ series }: { series: readonly ChartSeries[] }) {
 export function CurveChart({ title, xTitle, yTitle, xs, keep, series, xScale, yScale, yDomain, width, testID }: Props) {
   const { palette } = useTheme();
   const [measured, setMeasured] = useState(0);
-  const drawWidth = width ?? (measured || FIRST_WIDTH);
+  // A print width is an upper bound: on a narrow screen the chart still fits its column.
+  const drawWidth = width ? Math.min(width, measured || width) : measured || FIRST_WIDTH;
   const range = yDomain ?? valueRange(series, yScale, keep);
   const onLayout = (e: LayoutChangeEvent) => {
     const w = Math.floor(e.nativeEvent.layout.width);
@@ -112,7 +113,7 @@ export function CurveChart({ title, xTitle, yTitle, xs, keep, series, xScale, yS
           </ThemedText>
         </View>
       ) : (
-        <View onLayout={width ? undefined : onLayout} style={width ? { width } : styles.frame} accessible accessibilityRole="image" accessibilityLabel={summary} testID={testID ? `${testID}-drawing` : undefined}>
+        <View onLayout={onLayout} style={width ? { width, maxWidth: '100%' } : styles.frame} accessible accessibilityRole="image" accessibilityLabel={summary} testID={testID ? `${testID}-drawing` : undefined}>
           <Drawing {...{ xs, keep, series, xScale, yScale, xTitle }} width={drawWidth} range={range} />
         </View>
       )}

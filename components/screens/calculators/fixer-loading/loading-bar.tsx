@@ -24,8 +24,8 @@ export function LoadingBar({ percent, width }: Props) {
   return (
     <View style={styles.box} testID="loading-bar">
       <ThemedText variant="label">{words}</ThemedText>
-      <View accessible accessibilityRole="image" accessibilityLabel={`Loading bar: ${words}`} style={width ? { width } : styles.fill}>
-        <Svg width={width ?? '100%'} height={BAR_HEIGHT} viewBox={`0 0 100 ${BAR_HEIGHT}`} preserveAspectRatio="none" aria-hidden>
+      <View accessible accessibilityRole="image" accessibilityLabel={`Loading bar: ${words}`} style={width ? { width, maxWidth: '100%' } : styles.fill}>
+        <Svg width="100%" height={BAR_HEIGHT} viewBox={`0 0 100 ${BAR_HEIGHT}`} preserveAspectRatio="none" aria-hidden>
           <Rect x={0} y={0} width={100} height={BAR_HEIGHT} fill={palette.primarySoft} />
           <Rect x={0} y={0} width={p} height={BAR_HEIGHT} fill={p >= 100 ? palette.danger : palette.primary} />
           {[25, 50, 75].map((t) => (
