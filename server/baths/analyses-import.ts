@@ -5,8 +5,7 @@
 import { randomUUID } from 'node:crypto';
 
 import { eq } from 'drizzle-orm';
-import { type NextFunction, type Request, type RequestHandler, type Response, Router } from 'express';
-import multer from 'multer';
+import { type Request, type Response, Router } from 'express';
 
 import { analyses } from '@/db/schema';
 import { allow, requireUser } from '@/server/auth/access';
@@ -15,8 +14,9 @@ import { writeAudit } from '@/server/audit';
 import { analysisColumns } from '@/server/baths/analysis-values';
 import { bathOf, findBath } from '@/server/baths/store';
 import { HttpError } from '@/server/http-error';
-import { output } from '@/server/output';
 import { parseCsv } from '@/server/library/csv';
+import { output } from '@/server/output';
+import { receiveOneFile } from '@/server/upload';
 import {
   ANALYSIS_CSV_REQUIRED,
   ANALYSIS_IMPORT_MAX_BYTES,
@@ -30,21 +30,7 @@ import {
 
 type Problem = AnalysisImportReport['problems'][number];
 
-const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: ANALYSIS_IMPORT_MAX_BYTES, files: 1, fields: 5 } });
 
-function receiveFile(): RequestHandler {
-  const handler = upload.single('file');
-  return (req: Request, res: Response, next: NextFunction) => {
-    handler(req, res, (err: unknown) => {
-      if (!err) return next();
-      if (err instanceof multer.MulterError) {
-        if (err.code === 'LIMIT_FILE_SIZE') return next(new HttpError(413, 'payload_too_large', `The file is larger than ${ANALYSIS_IMPORT_MAX_BYTES / 1_000_000} MB; split it into smaller files.`));
-        return next(new HttpError(400, 'validation_failed', `file: ${err.message}; send one CSV file in the field "file"`, [{ path: 'file', message: err.message }]));
-      }
-      return next(err);
-    });
-  };
-}
 
 // Ways shops write the units; matched case-insensitively after trimming.
 const UNIT_WORDS: Record<string, BathUnit> = {
@@ -123,7 +109,7 @@ function messageFor(issue: { code: string; message: string; path: PropertyKey[] 
 /** POST /baths/:id/analyses/import: multipart with `file` (CSV) and `mode` ("all" or "valid"). */
 export function analysesImportRouter(ctx: AuthContext): Router {
   const router = Router();
-  router.post('/baths/:id/analyses/import', allow('chemist', 'technician'), receiveFile(), async (req: Request, res: Response) => {
+  router.post('/baths/:id/analyses/import', allow('chemist', 'technician'), receiveOneFile(ANALYSIS_IMPORT_MAX_BYTES, 'split it into smaller files'), async (req: Request, res: Response) => {
     const user = requireUser(res);
     const modeText = typeof req.body?.mode === 'string' && req.body.mode !== '' ? req.body.mode : 'all';
     if (modeText !== 'all' && modeText !== 'valid') {

@@ -7,8 +7,7 @@ import fs from 'node:fs/promises';
 import path from 'node:path';
 
 import { and, desc, eq } from 'drizzle-orm';
-import { type NextFunction, type Request, type RequestHandler, type Response, Router } from 'express';
-import multer from 'multer';
+import { type Request, type Response, Router } from 'express';
 import { z } from 'zod';
 
 import { attachments, type AttachmentRow } from '@/db/schema';
@@ -18,11 +17,11 @@ import { writeAudit } from '@/server/audit';
 import { findBath, namesOf } from '@/server/baths/store';
 import { HttpError } from '@/server/http-error';
 import { output } from '@/server/output';
+import { receiveOneFile } from '@/server/upload';
 import { type Attachment, attachmentListSchema, ATTACHMENT_MAX_BYTES, attachmentSchema, type ATTACHMENT_TYPES } from '@/shared/baths';
 
 type AttachmentType = (typeof ATTACHMENT_TYPES)[number];
 
-const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: ATTACHMENT_MAX_BYTES, files: 1, fields: 5 } });
 
 const titleSchema = z.string().trim().max(200, 'must be at most 200 characters');
 const idParam = z.string().uuid();
@@ -37,19 +36,6 @@ export function sniffType(buffer: Buffer): AttachmentType | null {
   return null;
 }
 
-function receiveFile(): RequestHandler {
-  const handler = upload.single('file');
-  return (req: Request, res: Response, next: NextFunction) => {
-    handler(req, res, (err: unknown) => {
-      if (!err) return next();
-      if (err instanceof multer.MulterError) {
-        if (err.code === 'LIMIT_FILE_SIZE') return next(new HttpError(413, 'payload_too_large', `The file is larger than ${ATTACHMENT_MAX_BYTES / 1_000_000} MB; attach a smaller scan or a PDF.`));
-        return next(new HttpError(400, 'validation_failed', `file: ${err.message}; send one file in the field "file"`, [{ path: 'file', message: err.message }]));
-      }
-      return next(err);
-    });
-  };
-}
 
 /** A file name safe to show and to send back: no folders, no control characters, at most 120 characters. */
 function cleanName(name: string, type: AttachmentType): string {
@@ -83,7 +69,7 @@ export function attachmentsRouter(ctx: AuthContext, uploadsDir: string): Router 
     res.json(output(attachmentListSchema, rows.map((r) => toAttachment(r, names))));
   });
 
-  router.post('/baths/:id/attachments', allow('chemist', 'technician'), receiveFile(), async (req: Request, res: Response) => {
+  router.post('/baths/:id/attachments', allow('chemist', 'technician'), receiveOneFile(ATTACHMENT_MAX_BYTES, 'attach a smaller scan or a PDF'), async (req: Request, res: Response) => {
     const user = requireUser(res);
     const file = req.file;
     if (!file) throw new HttpError(400, 'validation_failed', 'file: choose a PDF, PNG or JPEG file to attach (field "file")', [{ path: 'file', message: 'choose a file' }]);

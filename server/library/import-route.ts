@@ -3,19 +3,18 @@
 // a new constant, or a revision when the reaction is already in the library with other values.
 // Rows identical to the approved version are left alone. With mode "all" nothing is written
 // unless every row is valid; with mode "valid" the valid rows are written and the rest reported.
-import type { NextFunction, Request, RequestHandler, Response } from 'express';
-import { Router } from 'express';
-import multer from 'multer';
 import { sql } from 'drizzle-orm';
+import { type Request, type Response, Router } from 'express';
 import type { ZodError } from 'zod';
 
+import { checkReaction, type CheckedReaction, ReactionError } from '@/lib/library/reaction';
 import { allow, requireUser } from '@/server/auth/access';
 import type { AuthContext } from '@/server/auth/context';
 import { writeAudit } from '@/server/audit';
 import { HttpError } from '@/server/http-error';
 import { parseCsv } from '@/server/library/csv';
-import { checkReaction, type CheckedReaction, ReactionError } from '@/lib/library/reaction';
 import { insertVersion, type LibrarySnapshot, readLibrary, type Tx } from '@/server/library/store';
+import { receiveOneFile } from '@/server/upload';
 import {
   CONSTANT_KINDS,
   type ConstantKind,
@@ -57,22 +56,7 @@ const FIELD_COLUMN: Record<string, string> = {
 
 const CSV_TYPES = new Set(['text/csv', 'text/plain', 'application/csv', 'application/vnd.ms-excel', 'text/comma-separated-values', 'application/octet-stream']);
 
-const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: IMPORT_MAX_BYTES, files: 1, fields: 5 } });
 
-/** multer's single-file parser with its errors turned into the API's error shape. */
-function receiveFile(): RequestHandler {
-  const handler = upload.single('file');
-  return (req: Request, res: Response, next: NextFunction) => {
-    handler(req, res, (err: unknown) => {
-      if (!err) return next();
-      if (err instanceof multer.MulterError) {
-        if (err.code === 'LIMIT_FILE_SIZE') return next(new HttpError(413, 'payload_too_large', `The file is larger than ${IMPORT_MAX_BYTES / 1_000_000} MB; split it into smaller files.`));
-        return next(new HttpError(400, 'validation_failed', `file: ${err.message}; send one CSV file in the field "file"`, [{ path: 'file', message: err.message }]));
-      }
-      return next(err);
-    });
-  };
-}
 
 /** Undoes the apostrophe the export puts before a cell a spreadsheet would run as a formula. */
 function unescapeCell(v: string): string {
@@ -244,7 +228,7 @@ async function writePlans(tx: Tx, plans: Planned[], userId: string): Promise<num
 /** POST /constants/import: multipart with `file` (CSV) and `mode` ("all" or "valid"). */
 export function importRouter(ctx: AuthContext): Router {
   const router = Router();
-  router.post('/constants/import', allow('chemist'), receiveFile(), async (req: Request, res: Response) => {
+  router.post('/constants/import', allow('chemist'), receiveOneFile(IMPORT_MAX_BYTES, 'split it into smaller files'), async (req: Request, res: Response) => {
     const user = requireUser(res);
     const modeText = typeof req.body?.mode === 'string' && req.body.mode !== '' ? req.body.mode : 'all';
     if (!(IMPORT_MODES as readonly string[]).includes(modeText)) {
