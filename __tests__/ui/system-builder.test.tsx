@@ -128,6 +128,21 @@ describe('Speciation from the library', () => {
     expect(sentBodies(fetchMock, 'POST', '/api/systems/build')).toHaveLength(0);
   });
 
+  it('takes a total in g/L of the ion and sends it as mol/L, converting what is typed when the unit changes', async () => {
+    const fetchMock = open({ 'POST /api/systems/build': { status: 200, body: thioBuilt } });
+    const inputs = await chooseFixer();
+    fireEvent.changeText(inputs.getByLabelText('Total Ag+ (mol/L)'), '0.1');
+    // The first unit group belongs to the first total, Ag+.
+    fireEvent.press(inputs.getAllByRole('radio', { name: 'g/L', checked: false })[0]!);
+    // 0.1 mol/L of Ag (107.8682 g/mol, IUPAC) is 10.78682 g/L.
+    expect(inputs.getByLabelText('Total Ag+ (g/L)')).toHaveProp('value', '10.7868');
+    fireEvent.changeText(inputs.getByLabelText('Total Ag+ (g/L)'), '5.39341');
+    fireEvent.press(inputs.getByRole('button', { name: 'Calculate' }));
+    await screen.findByText(/Silver is held mostly/);
+    const sent = sentBodies(fetchMock, 'POST', '/api/systems/build')[0] as { totals: Record<string, number> };
+    expect(sent.totals['Ag+']).toBeCloseTo(0.05, 9);
+  });
+
   it('builds the system, solves it here and says where the silver is', async () => {
     const fetchMock = open({ 'POST /api/systems/build': { status: 200, body: thioBuilt } });
     const inputs = await chooseFixer();

@@ -3,7 +3,7 @@ import { StyleSheet, View } from 'react-native';
 import { CautionNote } from '@/components/screens/calculate/caution-note';
 import { ChoiceChips } from '@/components/screens/calculate/choice-chips';
 import { COUNTER_CHOICES, LIGAND_CHOICES, METAL_CHOICES, type ComponentChoice } from '@/components/screens/calculate/speciation-summary';
-import { type ActivityChoice, type ComponentGroup, type SystemForm } from '@/components/screens/calculate/use-system-form';
+import { type ActivityChoice, type ComponentGroup, type SystemForm, TOTAL_UNITS, type TotalUnit } from '@/components/screens/calculate/use-system-form';
 import { space } from '@/components/theme/tokens';
 import { ToggleChip } from '@/components/ui/chip';
 import { TextField } from '@/components/ui/text-field';
@@ -58,15 +58,23 @@ export function SystemForm({ form, disabled, onSubmit }: { form: SystemForm; dis
             Analytical concentration of each chosen ion, free and bound together, in mol/L.
           </ThemedText>
           {form.chosen.map((formula) => (
-            <TextField
-              key={formula}
-              label={`Total ${formula} (mol/L)`}
-              value={form.totals[formula] ?? ''}
-              onChangeText={(text) => form.setTotal(formula, text)}
-              onSubmit={onSubmit}
-              error={form.errors.fields[`totals.${formula}`]}
-              inputMode="decimal"
-            />
+            <View key={formula} style={styles.total}>
+              <TextField
+                label={`Total ${formula} (${form.totalUnits[formula] ?? 'mol/L'})`}
+                value={form.totals[formula] ?? ''}
+                onChangeText={(text) => form.setTotal(formula, text)}
+                onSubmit={onSubmit}
+                error={form.errors.fields[`totals.${formula}`]}
+                inputMode="decimal"
+              />
+              <ChoiceChips<TotalUnit>
+                label={`Unit of the ${formula} total`}
+                options={TOTAL_UNITS.map((u) => ({ value: u, label: u, hint: u === 'mol/L' || u === 'mmol/L' ? undefined : `mass of ${formula.replace(/[+-]\d*$/, '')} per volume` }))}
+                value={form.totalUnits[formula] ?? 'mol/L'}
+                onChange={(u) => form.setTotalUnit(formula, u)}
+                disabled={disabled}
+              />
+            </View>
           ))}
         </View>
       ) : null}
@@ -109,6 +117,7 @@ export function SystemForm({ form, disabled, onSubmit }: { form: SystemForm; dis
 }
 
 const styles = StyleSheet.create({
+  total: { gap: space.xs },
   form: { gap: space.lg },
   group: { gap: space.xs },
   chips: { flexDirection: 'row', flexWrap: 'wrap', gap: space.xs },

@@ -2,6 +2,7 @@ import { useState } from 'react';
 
 import { COUNTER_CHOICES, LIGAND_CHOICES, METAL_CHOICES } from '@/components/screens/calculate/speciation-summary';
 import { checkForm, NO_ERRORS, type FormErrors } from '@/lib/api/form-errors';
+import { convertConcentration } from '@/lib/units';
 import { systemRequestSchema, type SystemRequest } from '@/shared/constants';
 
 /** Which list a component belongs to in the request. */
@@ -31,6 +32,8 @@ export function parseAmount(text: string): number | undefined {
 export function useSystemForm() {
   const [groups, setGroups] = useState<Record<ComponentGroup, string[]>>({ metals: [], ligands: [], counterIons: [] });
   const [totals, setTotals] = useState<Record<string, string>>({});
+  // The unit each total is typed in (mol/L unless changed); sent as mol/L.
+  const [totalUnits, setTotalUnits] = useState<Record<string, TotalUnit>>({});
   const [pH, setPH] = useState('');
   const [temperature, setTemperature] = useState('25');
   const [activity, setActivity] = useState<ActivityChoice>('davies');
@@ -60,9 +63,11 @@ export function useSystemForm() {
     const amounts: Record<string, number> = {};
     for (const formula of chosen) {
       const value = parseAmount(totals[formula] ?? '');
-      if (value === undefined) fields[`totals.${formula}`] = 'Enter the total in mol/L';
-      else if (Number.isNaN(value)) fields[`totals.${formula}`] = 'Must be a number of mol/L';
-      else amounts[formula] = value;
+      const unit = totalUnits[formula] ?? 'mol/L';
+      if (value === undefined) fields[`totals.${formula}`] = `Enter the total in ${unit}`;
+      else if (Number.isNaN(value)) fields[`totals.${formula}`] = `Must be a number of ${unit}`;
+      else if (value < 0) fields[`totals.${formula}`] = 'Cannot be negative';
+      else amounts[formula] = toMolPerLitre(value, unit, formula);
     }
     const pHValue = parseAmount(pH);
     if (pHValue !== undefined && Number.isNaN(pHValue)) fields.pH = 'Must be a number (or leave it empty)';
@@ -93,6 +98,7 @@ export function useSystemForm() {
       counterIons: ordered('counterIons', request.counterIons ?? []),
     });
     setTotals(Object.fromEntries(Object.entries(request.totals ?? {}).map(([k, v]) => [k, amountText(v)])));
+    setTotalUnits({});
     setPH(request.pH === undefined ? '' : amountText(request.pH));
     setTemperature(request.temperatureC === undefined ? '25' : amountText(request.temperatureC));
     setActivity(request.activity ?? 'davies');
@@ -106,6 +112,7 @@ export function useSystemForm() {
     groups,
     chosen,
     totals,
+    totalUnits,
     pH,
     temperature,
     activity,
@@ -118,6 +125,17 @@ export function useSystemForm() {
     load,
     toRequest,
     knownFields: () => knownFields(chosen),
+    /** Changes the unit a total is typed in, converting what is typed so the amount stays the same. */
+    setTotalUnit: (formula: string, unit: TotalUnit) => {
+      const from = totalUnits[formula] ?? 'mol/L';
+      const value = parseAmount(totals[formula] ?? '');
+      if (value !== undefined && !Number.isNaN(value) && value >= 0 && from !== unit) {
+        const converted = convertConcentration(value, from, unit, { formula }).toNumber();
+        setTotals((now) => ({ ...now, [formula]: amountText(Number(converted.toPrecision(6))) }));
+      }
+      setTotalUnits((now) => ({ ...now, [formula]: unit }));
+      touched();
+    },
     setTotal: (formula: string, text: string) => {
       setTotals((now) => ({ ...now, [formula]: text }));
       touched();
@@ -164,4 +182,13 @@ function amountText(value: number): string {
 
 function knownFields(chosen: readonly string[]): string[] {
   return [...FIXED_FIELDS, ...chosen.map((f) => `totals.${f}`)];
+}
+
+/** Units a total may be typed in: the mass ones count the ion's own formula (g/L of Ag for Ag+, of CN for CN-). */
+export const TOTAL_UNITS = ['mol/L', 'mmol/L', 'g/L', 'mg/L', 'oz/gal', 'troy oz/gal'] as const;
+export type TotalUnit = (typeof TOTAL_UNITS)[number];
+
+/** A total in mol/L from a value in `unit` of the component `formula`. */
+export function toMolPerLitre(value: number, unit: TotalUnit, formula: string): number {
+  return unit === 'mol/L' ? value : convertConcentration(value, unit, 'mol/L', { formula }).toNumber();
 }
