@@ -1,33 +1,10 @@
 import { StyleSheet, View } from 'react-native';
 
-import { DataTable, type Column } from '@/components/screens/calculate/data-table';
-import { radius, space } from '@/components/theme/tokens';
-import { useTheme } from '@/components/theme/use-theme';
+import { ProblemsTable, ReportCount } from '@/components/screens/csv-report/report-parts';
+import { space } from '@/components/theme/tokens';
 import { Notice } from '@/components/ui/notice';
 import { ThemedText } from '@/components/ui/themed-text';
-import { sentence } from '@/lib/api/form-errors';
 import { type AnalysisImportOutcome } from '@/lib/api/use-bath-detail';
-import { type AnalysisImportReport } from '@/shared/baths';
-
-type Problem = AnalysisImportReport['problems'][number];
-
-const PROBLEM_COLUMNS: readonly Column<Problem>[] = [
-  { key: 'row', label: 'Line', flex: 0.6, cell: (p) => `Line ${p.row}` },
-  { key: 'column', label: 'Column', flex: 1, cell: (p) => p.column ?? 'whole line' },
-  { key: 'message', label: 'What is wrong', flex: 3, cell: (p) => sentence(p.message) },
-];
-
-function Count({ label, value }: { label: string; value: number }) {
-  const { palette } = useTheme();
-  return (
-    <View style={[styles.count, { borderColor: palette.border }]} accessible accessibilityLabel={`${label}: ${value}`}>
-      <ThemedText variant="title">{String(value)}</ThemedText>
-      <ThemedText variant="caption" tone="textMuted">
-        {label}
-      </ThemedText>
-    </View>
-  );
-}
 
 function headline({ report, refused, message }: AnalysisImportOutcome): { kind: 'error' | 'success' | 'info'; text: string } {
   if (refused) {
@@ -45,7 +22,6 @@ function headline({ report, refused, message }: AnalysisImportOutcome): { kind: 
 export function AnalysisImportReportCard({ outcome }: { outcome: AnalysisImportOutcome }) {
   const { report } = outcome;
   const head = headline(outcome);
-  const problems = [...report.problems].sort((a, b) => a.row - b.row);
   return (
     <View style={styles.stack} testID="analysis-import-report">
       <ThemedText variant="label" accessibilityRole="header" aria-level={3}>
@@ -53,21 +29,11 @@ export function AnalysisImportReportCard({ outcome }: { outcome: AnalysisImportO
       </ThemedText>
       <Notice kind={head.kind} message={head.text} testID="analysis-import-headline" />
       <View style={styles.counts}>
-        <Count label="Rows read" value={report.rows} />
-        <Count label="Analyses added" value={report.created} />
-        <Count label="Rejected" value={report.rejected} />
+        <ReportCount label="Rows read" value={report.rows} minWidth={96} />
+        <ReportCount label="Analyses added" value={report.created} minWidth={96} />
+        <ReportCount label="Rejected" value={report.rejected} minWidth={96} />
       </View>
-      {problems.length > 0 ? (
-        <>
-          <ThemedText variant="label" accessibilityRole="header" aria-level={3}>
-            Problems
-          </ThemedText>
-          <ThemedText variant="caption" tone="textMuted">
-            Line numbers are lines of the file; the header is line 1.
-          </ThemedText>
-          <DataTable label="Problems" columns={PROBLEM_COLUMNS} rows={problems} rowKey={(p) => `${p.row}-${p.column ?? ''}-${p.message}`} testID="analysis-import-problems" />
-        </>
-      ) : null}
+      <ProblemsTable problems={report.problems} testID="analysis-import-problems" />
     </View>
   );
 }
@@ -75,5 +41,4 @@ export function AnalysisImportReportCard({ outcome }: { outcome: AnalysisImportO
 const styles = StyleSheet.create({
   stack: { gap: space.sm },
   counts: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
-  count: { minWidth: 96, flexGrow: 1, flexBasis: 96, borderWidth: 1, borderRadius: radius.md, padding: space.sm, gap: space.xxs },
 });
