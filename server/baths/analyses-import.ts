@@ -14,7 +14,7 @@ import { writeAudit } from '@/server/audit';
 import { analysisColumns } from '@/server/baths/analysis-values';
 import { bathOf, findBath } from '@/server/baths/store';
 import { HttpError } from '@/server/http-error';
-import { parseCsv } from '@/server/library/csv';
+import { parseCsv, refusedUpload, uploadMode } from '@/server/library/csv';
 import { output } from '@/server/output';
 import { receiveOneFile } from '@/server/upload';
 import {
@@ -111,11 +111,7 @@ export function analysesImportRouter(ctx: AuthContext): Router {
   const router = Router();
   router.post('/baths/:id/analyses/import', allow('chemist', 'technician'), receiveOneFile(ANALYSIS_IMPORT_MAX_BYTES, 'split it into smaller files'), async (req: Request, res: Response) => {
     const user = requireUser(res);
-    const modeText = typeof req.body?.mode === 'string' && req.body.mode !== '' ? req.body.mode : 'all';
-    if (modeText !== 'all' && modeText !== 'valid') {
-      throw new HttpError(400, 'validation_failed', 'mode: must be "all" (nothing unless every row is valid) or "valid" (import the valid rows)', [{ path: 'mode', message: 'must be all or valid' }]);
-    }
-    const mode = modeText as 'all' | 'valid';
+    const mode = uploadMode(req.body, 'import the valid rows');
     const file = req.file;
     if (!file) throw new HttpError(400, 'validation_failed', 'file: choose a CSV file of analyses (field "file")', [{ path: 'file', message: 'choose a CSV file' }]);
     if (!/\.(csv|txt)$/i.test(file.originalname) || file.buffer.includes(0)) {
@@ -185,13 +181,7 @@ export function analysesImportRouter(ctx: AuthContext): Router {
       return { ...base, created: ids.length, written: ids.length > 0, analysisIds: ids };
     });
     if (!report.written && report.problems.length > 0 && mode === 'all') {
-      const first = report.problems[0] as Problem;
-      throw new HttpError(
-        422,
-        'validation_failed',
-        `Nothing was imported: ${report.rejected} row${report.rejected === 1 ? ' has' : 's have'} a problem (first: row ${first.row}${first.column ? `, ${first.column}` : ''}: ${first.message}).`,
-        report,
-      );
+      throw refusedUpload(report);
     }
     res.json(output(analysisImportReportSchema, report));
   });

@@ -1,6 +1,8 @@
 // CSV in and out for the library (RFC 4180: commas, double quotes, CRLF between records).
 import Papa from 'papaparse';
 
+import { HttpError } from '@/server/http-error';
+
 type Cell = string | number | null | undefined;
 
 function cell(v: Cell): string {
@@ -39,4 +41,28 @@ export function parseCsv(text: string): ParsedCsv {
     records.push({ line: i + 1, cells });
   }
   return { header, records, errors };
+}
+
+/** How an upload treats bad rows: "all" writes nothing unless every row is valid, "valid" writes the valid ones. */
+export type UploadMode = 'all' | 'valid';
+
+/** The upload's `mode` field (default "all"); a 400 naming the field for anything else. */
+export function uploadMode(body: unknown, validMeans: string): UploadMode {
+  const raw = (body as { mode?: unknown } | undefined)?.mode;
+  const text = typeof raw === 'string' && raw !== '' ? raw : 'all';
+  if (text !== 'all' && text !== 'valid') {
+    throw new HttpError(400, 'validation_failed', `mode: must be "all" (nothing unless every row is valid) or "valid" (${validMeans})`, [{ path: 'mode', message: 'must be all or valid' }]);
+  }
+  return text;
+}
+
+/** The 422 for an upload in mode "all" that wrote nothing because of bad rows, with the report as details. */
+export function refusedUpload(report: { rejected: number; problems: readonly { row: number; column: string | null; message: string }[] }): HttpError {
+  const first = report.problems[0] as { row: number; column: string | null; message: string };
+  return new HttpError(
+    422,
+    'validation_failed',
+    `Nothing was imported: ${report.rejected} row${report.rejected === 1 ? ' has' : 's have'} a problem (first: row ${first.row}${first.column ? `, ${first.column}` : ''}: ${first.message}).`,
+    report,
+  );
 }

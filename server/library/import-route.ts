@@ -12,8 +12,8 @@ import { allow, requireUser } from '@/server/auth/access';
 import type { AuthContext } from '@/server/auth/context';
 import { writeAudit } from '@/server/audit';
 import { HttpError } from '@/server/http-error';
-import { parseCsv } from '@/server/library/csv';
-import { insertVersion, type LibrarySnapshot, readLibrary, type Tx } from '@/server/library/store';
+import { parseCsv, refusedUpload, uploadMode } from '@/server/library/csv';
+import { insertVersion, type LibrarySnapshot, PROPOSAL_LOCK_KEY, readLibrary, type Tx } from '@/server/library/store';
 import { receiveOneFile } from '@/server/upload';
 import {
   CONSTANT_KINDS,
@@ -21,15 +21,10 @@ import {
   CSV_REQUIRED,
   IMPORT_MAX_BYTES,
   IMPORT_MAX_ROWS,
-  IMPORT_MODES,
-  type ImportMode,
   type ImportProblem,
   type ImportReport,
   proposalSchema,
 } from '@/shared/constants';
-
-// Same key as proposals (routes.ts), so an import and a proposal never add the same reaction twice.
-const PROPOSAL_LOCK_KEY = 4_711_002;
 
 const KIND_WORDS: Record<string, ConstantKind> = {
   ksp: 'solubility_product',
@@ -230,11 +225,7 @@ export function importRouter(ctx: AuthContext): Router {
   const router = Router();
   router.post('/constants/import', allow('chemist'), receiveOneFile(IMPORT_MAX_BYTES, 'split it into smaller files'), async (req: Request, res: Response) => {
     const user = requireUser(res);
-    const modeText = typeof req.body?.mode === 'string' && req.body.mode !== '' ? req.body.mode : 'all';
-    if (!(IMPORT_MODES as readonly string[]).includes(modeText)) {
-      throw new HttpError(400, 'validation_failed', 'mode: must be "all" (nothing unless every row is valid) or "valid" (import the valid rows as drafts)', [{ path: 'mode', message: 'must be all or valid' }]);
-    }
-    const mode = modeText as ImportMode;
+    const mode = uploadMode(req.body, 'import the valid rows as drafts');
     const file = req.file;
     if (!file) throw new HttpError(400, 'validation_failed', 'file: choose a CSV file to import (field "file")', [{ path: 'file', message: 'choose a CSV file' }]);
     const typeOk = CSV_TYPES.has(file.mimetype) || /\.csv$/i.test(file.originalname);
@@ -264,13 +255,7 @@ export function importRouter(ctx: AuthContext): Router {
       return { ...base, created: draftIds.length, written: draftIds.length > 0, draftIds };
     });
     if (!report.written && report.problems.length > 0 && mode === 'all') {
-      const first = report.problems[0] as ImportProblem;
-      throw new HttpError(
-        422,
-        'validation_failed',
-        `Nothing was imported: ${report.rejected} row${report.rejected === 1 ? ' has' : 's have'} a problem (first: row ${first.row}${first.column ? `, ${first.column}` : ''}: ${first.message}).`,
-        report,
-      );
+      throw refusedUpload(report);
     }
     res.json(report);
   });

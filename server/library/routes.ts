@@ -14,6 +14,7 @@ import { reviewOutcomeMail } from '@/server/library/mail';
 import {
   filterSummaries,
   insertVersion,
+  PROPOSAL_LOCK_KEY,
   readLibrary,
   summaries,
   toSpecies,
@@ -29,9 +30,6 @@ import {
   revisionSchema,
   reviewSchema,
 } from '@/shared/constants';
-
-// Arbitrary key for pg_advisory_xact_lock around new proposals and imports.
-export const PROPOSAL_LOCK_KEY = 4_711_002;
 
 const idParam = z.coerce.number().int().positive();
 

@@ -21,6 +21,9 @@ import {
   type Term,
 } from '@/shared/constants';
 
+/** Key for pg_advisory_xact_lock around new proposals and imports, so two never add the same reaction. */
+export const PROPOSAL_LOCK_KEY = 4_711_002;
+
 /** A database or a transaction. */
 export type Tx = Pick<Db, 'select' | 'insert' | 'update' | 'execute'>;
 
