@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { useAttachmentPicker, type PickedAttachment } from '@/components/screens/bath-detail/attachment-picker';
-import { formatBytes } from '@/components/screens/library/import-form';
+import { formatBytes } from '@/components/screens/csv-report/use-csv-upload';
 import { space } from '@/components/theme/tokens';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';

@@ -2,7 +2,7 @@ import { StyleSheet, View } from 'react-native';
 
 import { AttachmentLink } from '@/components/screens/bath-detail/attachment-link';
 import { AttachmentUpload } from '@/components/screens/bath-detail/attachment-upload';
-import { formatBytes } from '@/components/screens/library/import-form';
+import { formatBytes } from '@/components/screens/csv-report/use-csv-upload';
 import { space } from '@/components/theme/tokens';
 import { useTheme } from '@/components/theme/use-theme';
 import { Card } from '@/components/ui/card';

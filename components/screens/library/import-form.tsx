@@ -1,69 +1,31 @@
-import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { ChoiceChips } from '@/components/screens/calculate/choice-chips';
 import { ImportReportCard } from '@/components/screens/library/import-report';
-import { useCsvPicker, type PickedFile } from '@/components/screens/library/import-picker';
+import { formatBytes, type UploadMode, useCsvUpload } from '@/components/screens/csv-report/use-csv-upload';
 import { space } from '@/components/theme/tokens';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { Notice } from '@/components/ui/notice';
 import { ThemedText } from '@/components/ui/themed-text';
-import { formatSignificant } from '@/lib/units';
 import { importFormData, useImportConstants, type ImportOutcome } from '@/lib/api/use-import';
-import { IMPORT_MAX_BYTES, type ImportMode } from '@/shared/constants';
+import { IMPORT_MAX_BYTES } from '@/shared/constants';
 
 const MODE_OPTIONS = [
   { value: 'all', label: 'Only if every row is valid', hint: 'Writes nothing when any row has a problem' },
   { value: 'valid', label: 'Import the valid rows as drafts, skip the rest', hint: 'Rows with a problem are reported and left out' },
 ] as const;
 
-/** A size in bytes as people read it (1 kB = 1000 bytes, as the limit is written). */
-export function formatBytes(bytes: number): string {
-  if (bytes < 1000) return `${bytes} bytes`;
-  if (bytes < 1_000_000) return `${formatSignificant(bytes / 1000, 3)} kB`;
-  return `${formatSignificant(bytes / 1_000_000, 3)} MB`;
-}
-
-/** Why a file cannot be sent, or null when it can (the server checks again). */
-function tooBig(file: PickedFile): string | null {
-  if (file.size === null || file.size <= IMPORT_MAX_BYTES) return null;
-  return `${file.name} is ${formatBytes(file.size)}; the largest file the import takes is ${formatBytes(IMPORT_MAX_BYTES)}. Split it into smaller files.`;
-}
-
 /** Choose a CSV file, choose what to do with bad rows, upload it and read the report. */
 export function ImportForm() {
-  const pick = useCsvPicker();
   const { trigger, isMutating } = useImportConstants();
-  const [file, setFile] = useState<PickedFile | null>(null);
-  const [mode, setMode] = useState<ImportMode>('all');
-  const [outcome, setOutcome] = useState<ImportOutcome | null>(null);
-  const [error, setError] = useState<string | null>(null);
-  const fileProblem = file ? tooBig(file) : null;
-
-  const choose = async () => {
-    setError(null);
-    try {
-      const picked = await pick();
-      if (picked) {
-        setFile(picked);
-        setOutcome(null);
-      }
-    } catch (cause) {
-      setError(cause instanceof Error ? cause.message : 'The file could not be opened.');
-    }
-  };
-
-  const upload = async () => {
-    if (!file || fileProblem || isMutating) return;
-    setError(null);
-    setOutcome(null);
-    try {
-      setOutcome(await trigger(importFormData(file.part, file.name, mode)));
-    } catch (cause) {
-      setError(cause instanceof Error ? cause.message : 'The import did not work.');
-    }
-  };
+  const { file, mode, setMode, outcome, error, fileProblem, choose, upload: send } = useCsvUpload<ImportOutcome>({
+    maxBytes: IMPORT_MAX_BYTES,
+    what: 'the import',
+    failed: 'The import did not work.',
+    send: (picked, m) => trigger(importFormData(picked.part, picked.name, m)),
+  });
+  const upload = () => send(isMutating);
 
   return (
     <View style={styles.stack}>
@@ -82,7 +44,7 @@ export function ImportForm() {
           </ThemedText>
         )}
         {fileProblem ? <Notice kind="error" message={fileProblem} /> : null}
-        <ChoiceChips<ImportMode> label="If some rows have problems" options={MODE_OPTIONS} value={mode} onChange={setMode} disabled={isMutating} />
+        <ChoiceChips<UploadMode> label="If some rows have problems" options={MODE_OPTIONS} value={mode} onChange={setMode} disabled={isMutating} />
         {error ? <Notice kind="error" message={error} /> : null}
         <Button
           label="Import"
