@@ -17,6 +17,7 @@ import { originCheck } from '@/server/middleware/origin-check';
 import { libraryRouter } from '@/server/library/routes';
 import { runsRouter } from '@/server/library/runs-routes';
 import { bathsRouter } from '@/server/baths/routes';
+import { safetyRouter } from '@/server/safety/routes';
 import { healthRouter } from '@/server/routes/health';
 import { webRouter } from '@/server/static';
 
@@ -120,6 +121,7 @@ export function createApp(options: AppOptions): Express {
   api.use(libraryRouter(auth));
   api.use(runsRouter(auth));
   api.use(bathsRouter(auth, options.uploadsDir));
+  api.use(safetyRouter(auth));
   api.use(apiNotFound);
   app.use('/api', api);
 

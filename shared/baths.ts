@@ -1,5 +1,8 @@
 import { z } from 'zod';
 
+import { personRefSchema } from './people';
+import { hazardBriefSchema, reviewBriefSchema, safetyStateSchema } from './safety';
+
 // Baths, their analysis log and attachments: request and response shapes shared by the client and
 // the server. Routes (all under /api):
 //   GET    /baths?q=&process=&status=                    (signed in)  -> BathSummary[]
@@ -137,8 +140,6 @@ export type BathInput = z.input<typeof bathInputSchema>;
 /** PATCH: any subset of the fields. */
 export const bathPatchSchema = bathInputSchema.partial().refine((v) => Object.keys(v).length > 0, 'change at least one field');
 
-export const personRefSchema = z.object({ id: z.string(), name: z.string() });
-
 /** One value of the latest analysis that lies outside its target range. */
 export const outOfRangeSchema = z.object({
   quantity: z.enum(QUANTITIES),
@@ -173,6 +174,8 @@ export const bathSchema = z.object({
   createdAt: z.string(),
   updatedAt: z.string(),
   archivedAt: z.string().nullable(),
+  /** The hazard rules on the latest analysis and the bath's latest safety review (single-bath answers). */
+  safety: safetyStateSchema.optional(),
 });
 export type Bath = z.infer<typeof bathSchema>;
 
@@ -183,6 +186,9 @@ export const bathSummarySchema = bathSchema.extend({
   lastAnalysisAgeDays: z.number().nullable(),
   /** Values of the latest analysis outside their target ranges, in the bath's units. */
   outOfRange: z.array(outOfRangeSchema),
+  /** What the hazard rules find on the latest analysis, as chips, and the latest safety review. */
+  hazards: z.array(hazardBriefSchema),
+  review: reviewBriefSchema.nullable(),
 });
 export type BathSummary = z.infer<typeof bathSummarySchema>;
 export const bathListSchema = z.array(bathSummarySchema);

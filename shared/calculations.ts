@@ -2,6 +2,7 @@ import { z } from 'zod';
 
 import { CALCULATOR_KEYS, type CalculatorKey } from './calculators';
 import { systemRequestSchema } from './constants';
+import { hazardSchema } from './safety';
 
 export { CALCULATOR_KEYS, CALCULATOR_LABELS, type CalculatorKey } from './calculators';
 
@@ -147,5 +148,7 @@ export const calculationOutcomeSchema = z.object({
   warnings: z.array(z.string()),
   /** The calculator's result as lib/calculators returns it (infinities and NaN become null). */
   result: z.unknown(),
+  /** What the hazard rules find with the thresholds in force (POST /calculations fills it). */
+  hazards: z.array(hazardSchema).optional(),
 });
 export type CalculationOutcome = z.infer<typeof calculationOutcomeSchema>;

@@ -1,6 +1,8 @@
 import { z } from 'zod';
 
 import { CALCULATOR_KEYS } from './calculators';
+import { personRefSchema } from './people';
+import { hazardBriefSchema, reviewBriefSchema, safetyStateSchema } from './safety';
 
 // The constants library, the system builder and saved runs: request and response shapes shared by
 // the client and the server. Routes (all under /api):
@@ -58,8 +60,6 @@ export const speciesListSchema = z.array(speciesSchema);
 
 export const termSchema = z.object({ species: z.string(), coefficient: z.number() });
 export type Term = z.infer<typeof termSchema>;
-
-export const personRefSchema = z.object({ id: z.string(), name: z.string() });
 
 export const constantSummarySchema = z.object({
   id: z.number(),
@@ -337,6 +337,10 @@ export const runSummarySchema = z.object({
   /** The one-line answer. */
   verdict: z.string(),
   bath: z.object({ id: z.string(), name: z.string() }).nullable(),
+  /** What the hazard rules found (shared/safety.ts), as chips; the detail has them in full. */
+  hazards: z.array(hazardBriefSchema),
+  review: reviewBriefSchema.nullable(),
+  released: z.boolean(),
 });
 export type RunSummary = z.infer<typeof runSummarySchema>;
 
@@ -359,5 +363,7 @@ export const runSchema = runSummarySchema.extend({
   warnings: z.array(z.string()),
   /** The calculator's own result (lib/calculators), JSON-safe; null for runs saved before calculators had one. */
   output: z.unknown(),
+  /** Hazards with their evidence, the safety desk's review and the release. */
+  safety: safetyStateSchema,
 });
 export type Run = z.infer<typeof runSchema>;

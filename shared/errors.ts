@@ -12,6 +12,8 @@ export const ERROR_CODES = [
   'not_found',
   'gone',
   'conflict',
+  // A flagged run released before the safety desk signed it off.
+  'sign_off_required',
   'rate_limited',
   'db_unavailable',
   'internal',

@@ -59,6 +59,15 @@ const MATRIX: Record<string, Rule> = {
   'GET /api/baths/:id/attachments': 'signed-in',
   'POST /api/baths/:id/attachments': ['chemist', 'technician'],
   'GET /api/baths/:id/attachments/:attachmentId': 'signed-in',
+  'GET /api/safety/thresholds': 'signed-in',
+  'GET /api/safety/thresholds/history': 'signed-in',
+  'POST /api/safety/thresholds': ['safety'],
+  'GET /api/safety/reviews': 'signed-in',
+  'GET /api/safety/reviews/:id': 'signed-in',
+  'POST /api/safety/reviews/:id/sign-off': ['safety'],
+  'POST /api/safety/reviews/:id/send-back': ['safety'],
+  'POST /api/safety/reviews/:id/resubmit': 'signed-in',
+  'POST /api/runs/:id/release': 'signed-in',
 };
 
 function ruleOf(access: Access | null): Rule | null {

@@ -3,3 +3,4 @@ export * from './audit';
 export * from './auth';
 export * from './library';
 export * from './baths';
+export * from './safety';

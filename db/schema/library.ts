@@ -128,6 +128,10 @@ export const runs = pgTable(
     // The one-line answer, and the calculator's own result (JSON-safe).
     verdict: text('verdict').notNull().default(''),
     output: jsonb('output'),
+    // The hazard rules' findings when saved (lib/hazards) and the thresholds version used; null
+    // for runs saved before the rules existed (they are evaluated when read).
+    hazards: jsonb('hazards'),
+    thresholdsVersion: integer('thresholds_version'),
     deletedBy: text('deleted_by').references(() => users.id),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     deletedAt: timestamp('deleted_at', { withTimezone: true }),

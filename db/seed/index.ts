@@ -13,7 +13,7 @@ import { seedTeam } from '@/db/seed/team';
  * Version of the demo data set. Raise it when a feature adds demo records; each version is
  * applied once per database, so `npm start` can run the seed on every start.
  */
-export const DEMO_SEED_VERSION = 4;
+export const DEMO_SEED_VERSION = 5;
 
 // Arbitrary constant for pg_advisory_xact_lock, so two starts at once do not both seed.
 const SEED_LOCK_KEY = 4_711_001;
@@ -23,7 +23,7 @@ export type SeedResult = { applied: boolean; version: number; production?: boole
 
 /**
  * Seeds the demo shop once per seed version, in one transaction: the demo team (one account per
- * role), the demo baths with their analyses and a lab report (v3), demo runs on them (v4), then a record of the seed in the audit log. Feature seeds (constants, baths, runs) join
+ * role), the demo baths with their analyses and a lab report (v3), demo runs on them (v4; v5 adds a what-if that waits on the safety desk), then a record of the seed in the audit log. Feature seeds (constants, baths, runs) join
  * this transaction as they are built. Never with NODE_ENV=production: demo accounts share a
  * published password.
  */

@@ -28,6 +28,8 @@ const DEMO_RUNS = [
     params: { variable: { kind: 'total', component: 'Ag+' }, from: 0.05, to: 0.6, points: 60, series: [{ kind: 'free', component: 'CN-' }] },
   },
   { bath: 'Fixer tank A, radiography', by: TECHNICIAN, title: 'Fixer loading before recovery', calculator: 'fixer_loading', params: { solid: 'AgBr(s)' } },
+  // A what-if below the shop's pH threshold: the hazard rules flag it and it waits on the safety desk.
+  { bath: 'Silver strike, line 2', by: CHEMIST, title: 'Strike if the pH sags to 10.3', calculator: 'speciation', params: {}, pH: 10.3 },
 ] as const;
 
 /** Saves the demo runs that are missing (by title); returns how many were added. */
@@ -41,6 +43,7 @@ export async function seedRuns(tx: Tx): Promise<number> {
     const bath = await bathOf(tx, row);
     const rows = await tx.select().from(analyses).where(eq(analyses.bathId, row.id)).orderBy(asc(analyses.sampledAt));
     const { system } = prefillFromBath(bath, rows.map((a) => toAnalysis(a, bath, new Map())));
+    if ('pH' in demo) system.pH = demo.pH;
     const input = runInputSchema.parse({ title: demo.title, calculator: demo.calculator, system, params: demo.params, bathId: row.id });
     await saveRun(tx, demo.by, input);
     added++;

@@ -16,6 +16,8 @@ import { bathOf, findBath } from '@/server/baths/store';
 import { HttpError } from '@/server/http-error';
 import { parseCsv, refusedUpload, uploadMode } from '@/server/library/csv';
 import { output } from '@/server/output';
+import { mailWaiting } from '@/server/safety/notify';
+import { checkBath } from '@/server/safety/store';
 import { receiveOneFile } from '@/server/upload';
 import {
   ANALYSIS_CSV_REQUIRED,
@@ -121,6 +123,7 @@ export function analysesImportRouter(ctx: AuthContext): Router {
     if (csv.records.length > ANALYSIS_IMPORT_MAX_ROWS) {
       throw new HttpError(400, 'validation_failed', `file: it has ${csv.records.length} rows; upload at most ${ANALYSIS_IMPORT_MAX_ROWS} at a time`, [{ path: 'file', message: `at most ${ANALYSIS_IMPORT_MAX_ROWS} rows` }]);
     }
+    let opened: string | null = null;
     const report = await ctx.db.transaction(async (tx): Promise<AnalysisImportReport> => {
       const row = await findBath(tx, req.params.id, true);
       if (row.status === 'archived') throw new HttpError(409, 'conflict', 'This bath is archived; analyses are no longer logged on it.');
@@ -177,12 +180,14 @@ export function analysesImportRouter(ctx: AuthContext): Router {
       }
       if (ids.length > 0) {
         await writeAudit(tx, { actor: user.id, action: 'analyses.imported', subject: `bath:${row.id}`, payload: { file: file.originalname, rows: csv.records.length, created: ids.length, rejected } });
+        opened = await checkBath(tx, row, user.id);
       }
       return { ...base, created: ids.length, written: ids.length > 0, analysisIds: ids };
     });
     if (!report.written && report.problems.length > 0 && mode === 'all') {
       throw refusedUpload(report);
     }
+    if (opened) await mailWaiting(ctx, req, opened);
     res.json(output(analysisImportReportSchema, report));
   });
   return router;

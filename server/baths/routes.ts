@@ -3,7 +3,7 @@
 // the audit log with what it changed.
 import { randomUUID } from 'node:crypto';
 
-import { asc, count, desc, eq, max } from 'drizzle-orm';
+import { asc, count, desc, eq, inArray, max } from 'drizzle-orm';
 import { type Request, type Response, Router } from 'express';
 
 import { analyses, baths, type BathRow } from '@/db/schema';
@@ -15,7 +15,11 @@ import { analysesImportRouter } from '@/server/baths/analyses-import';
 import { attachmentsRouter } from '@/server/baths/attachments';
 import { bathColumns, bathOf, findBath, namesOf, outOfRange, toAnalysis, toBath, valuesOf } from '@/server/baths/store';
 import { HttpError } from '@/server/http-error';
+import type { Tx } from '@/server/library/store';
 import { output } from '@/server/output';
+import { mailWaiting } from '@/server/safety/notify';
+import { bathSafety, checkBath, currentThresholds, latestReviewOfBath, safeBathHazards } from '@/server/safety/store';
+import { briefHazards, type ReviewStatus } from '@/shared/safety';
 import {
   analysisInputSchema,
   analysisListSchema,
@@ -25,6 +29,7 @@ import {
   bathInputSchema,
   bathPatchSchema,
   bathQuerySchema,
+  type Bath,
   type BathSummary,
   PROCESS_INFO,
 } from '@/shared/baths';
@@ -44,6 +49,12 @@ function changes(before: BathRow, after: Partial<BathRow>): Record<string, { fro
     if (JSON.stringify(old) !== JSON.stringify(v)) out[k] = { from: old, to: v };
   }
   return out;
+}
+
+/** A bath with its hazards and latest safety review (the single-bath answers). */
+async function withSafety(tx: Tx, row: BathRow): Promise<Bath> {
+  const bath = await bathOf(tx, row);
+  return { ...bath, safety: await bathSafety(tx, bath) };
 }
 
 /** Baths, analyses, the analysis CSV upload and attachments. */
@@ -74,6 +85,13 @@ export function bathsRouter(ctx: AuthContext, uploadsDir: string): Router {
     const statBy = new Map(stats.map((s) => [s.bathId, s]));
     const latestBy = new Map(latest.map((a) => [a.bathId, a]));
     const now = Date.now();
+    const thresholds = (await currentThresholds(db)).values;
+    const allAnalyses = picked.length ? await db.select().from(analyses).where(inArray(analyses.bathId, picked.map((r) => r.id))) : [];
+    const reviews = new Map<string, { id: string; status: ReviewStatus }>();
+    for (const r of picked) {
+      const latestReview = await latestReviewOfBath(db, r.id);
+      if (latestReview) reviews.set(r.id, { id: latestReview.id, status: latestReview.status as ReviewStatus });
+    }
     const list: BathSummary[] = picked.map((r) => {
       const bath = toBath(r, names);
       const stat = statBy.get(r.id);
@@ -85,6 +103,8 @@ export function bathsRouter(ctx: AuthContext, uploadsDir: string): Router {
         lastAnalysisAt: lastAt?.toISOString() ?? null,
         lastAnalysisAgeDays: lastAt ? calendarDaysBetween(lastAt.getTime(), now) : null,
         outOfRange: last ? outOfRange(bath, valuesOf(last)) : [],
+        hazards: briefHazards(safeBathHazards(bath, allAnalyses.filter((a) => a.bathId === r.id).map((a) => toAnalysis(a, bath, names)), thresholds)),
+        review: reviews.get(r.id) ?? null,
       };
     });
     res.json(output(bathListSchema, list));
@@ -93,18 +113,20 @@ export function bathsRouter(ctx: AuthContext, uploadsDir: string): Router {
   router.post('/baths', allow('chemist', 'technician'), async (req: Request, res: Response) => {
     const user = requireUser(res);
     const input = bathInputSchema.parse(req.body);
-    const bath = await db.transaction(async (tx) => {
+    const { bath, opened } = await db.transaction(async (tx) => {
       const columns = await bathColumns(tx, input, user.id);
       const [row] = await tx.insert(baths).values({ id: randomUUID(), ...columns, createdBy: user.id }).returning();
       if (!row) throw new Error('bath not stored');
       await writeAudit(tx, { actor: user.id, action: 'bath.created', subject: `bath:${row.id}`, payload: { name: row.name, process: row.process } });
-      return bathOf(tx, row);
+      const review = await checkBath(tx, row, user.id);
+      return { bath: await withSafety(tx, row), opened: review };
     });
+    if (opened) await mailWaiting(ctx, req, opened);
     res.status(201).json(output(bathSchema, bath));
   });
 
   router.get('/baths/:id', signedIn, async (req: Request, res: Response) => {
-    res.json(output(bathSchema, await bathOf(db, await findBath(db, req.params.id))));
+    res.json(output(bathSchema, await withSafety(db, await findBath(db, req.params.id))));
   });
 
   router.patch('/baths/:id', allow('chemist', 'technician'), async (req: Request, res: Response) => {
@@ -114,7 +136,7 @@ export function bathsRouter(ctx: AuthContext, uploadsDir: string): Router {
     // name leaves the targets, make-up and notes as they are.
     const given = new Set(Object.keys((req.body ?? {}) as object));
     const patch = Object.fromEntries(Object.entries(parsed).filter(([k]) => given.has(k)));
-    const bath = await db.transaction(async (tx) => {
+    const { bath, opened } = await db.transaction(async (tx) => {
       const before = await findBath(tx, req.params.id, true);
       if (before.status === 'archived') throw new HttpError(409, 'conflict', 'This bath is archived; an admin can restore it before it is edited.');
       const current = toBath(before, new Map());
@@ -140,8 +162,10 @@ export function bathsRouter(ctx: AuthContext, uploadsDir: string): Router {
       const [row] = await tx.update(baths).set({ ...columns, updatedAt: new Date() }).where(eq(baths.id, before.id)).returning();
       if (!row) throw new Error('bath not updated');
       if (Object.keys(diff).length > 0) await writeAudit(tx, { actor: user.id, action: 'bath.updated', subject: `bath:${row.id}`, payload: { name: row.name, changes: diff } });
-      return bathOf(tx, row);
+      const review = await checkBath(tx, row, user.id);
+      return { bath: await withSafety(tx, row), opened: review };
     });
+    if (opened) await mailWaiting(ctx, req, opened);
     res.json(output(bathSchema, bath));
   });
 
@@ -179,7 +203,7 @@ export function bathsRouter(ctx: AuthContext, uploadsDir: string): Router {
   router.post('/baths/:id/analyses', allow('chemist', 'technician'), async (req: Request, res: Response) => {
     const user = requireUser(res);
     const input = analysisInputSchema.parse(req.body);
-    const analysis = await db.transaction(async (tx) => {
+    const { analysis, opened } = await db.transaction(async (tx) => {
       const row = await findBath(tx, req.params.id);
       if (row.status === 'archived') throw new HttpError(409, 'conflict', 'This bath is archived; analyses are no longer logged on it.');
       const bath = await bathOf(tx, row);
@@ -194,8 +218,10 @@ export function bathsRouter(ctx: AuthContext, uploadsDir: string): Router {
         .returning();
       if (!stored) throw new Error('analysis not stored');
       await writeAudit(tx, { actor: user.id, action: 'analysis.added', subject: `bath:${row.id}`, payload: { analysis: stored.id, sampledAt: stored.sampledAt.toISOString(), entered: stored.entered } });
-      return toAnalysis(stored, bath, new Map([[user.id, user.name]]));
+      const review = await checkBath(tx, row, user.id);
+      return { analysis: toAnalysis(stored, bath, new Map([[user.id, user.name]])), opened: review };
     });
+    if (opened) await mailWaiting(ctx, req, opened);
     res.status(201).json(output(analysisSchema, analysis));
   });
 

@@ -20,6 +20,10 @@ import { writeAudit } from '@/server/audit';
 import { HttpError } from '@/server/http-error';
 import { catalogueOf, libraryConstants, readLibrary, type Tx } from '@/server/library/store';
 import { output } from '@/server/output';
+import { mailWaiting } from '@/server/safety/notify';
+import { currentThresholds, hazardsOfCalculation, openReview, releasedRuns, reviewsOfRuns, runHazards, runSafety } from '@/server/safety/store';
+import { isFlagged } from '@/lib/hazards';
+import { briefHazards, type HazardThresholds, type ReviewStatus } from '@/shared/safety';
 import { calculationOutcomeSchema, calculationRequestSchema, type CalculatorKey, PARAMS_SCHEMAS } from '@/shared/calculations';
 import {
   type ConstantStatus,
@@ -79,7 +83,9 @@ function calculate(calculator: CalculatorKey, rawParams: unknown, built: BuildOu
   }
 }
 
-function summaryOf(row: RunRow, authorName: string, bathName: string | null): RunSummary {
+type ListSafety = { thresholds: HazardThresholds; review: { id: string; status: string } | null; released: boolean };
+
+function summaryOf(row: RunRow, authorName: string, bathName: string | null, safety: ListSafety): RunSummary {
   return {
     id: row.id,
     title: row.title,
@@ -90,6 +96,9 @@ function summaryOf(row: RunRow, authorName: string, bathName: string | null): Ru
     usesDrafts: row.usesDrafts,
     verdict: row.verdict,
     bath: row.bathId ? { id: row.bathId, name: bathName ?? 'Unknown bath' } : null,
+    hazards: briefHazards(runHazards(row, safety.thresholds)),
+    review: safety.review ? { id: safety.review.id, status: safety.review.status as ReviewStatus } : null,
+    released: safety.released,
   };
 }
 
@@ -99,8 +108,10 @@ async function runDetail(tx: Tx, row: RunRow, authorName: string, bathName: stri
   const now = used.length ? await tx.select().from(constants) : [];
   const byId = new Map(now.map((c) => [c.id, c]));
   const approvedByLineage = new Map(now.filter((c) => c.status === 'approved').map((c) => [c.lineageId, c]));
+  const safety = await runSafety(tx, row);
   return {
-    ...summaryOf(row, authorName, bathName),
+    ...summaryOf(row, authorName, bathName, { thresholds: (await currentThresholds(tx)).values, review: safety.review, released: safety.released !== null }),
+    safety,
     inputs: row.inputs as Record<string, unknown>,
     problem: row.problem as Run['problem'],
     engineVersion: row.engineVersion,
@@ -150,6 +161,8 @@ export async function saveRun(tx: Tx, user: { id: string; name: string }, input:
   const built = await buildFromLibrary(tx, input.system);
   const result = solveOrExplain(built, input.system.pH);
   const outcome = calculate(input.calculator, input.params, built, input.system.pH);
+  const thresholds = await currentThresholds(tx);
+  const hazards = hazardsOfCalculation({ calculator: input.calculator, system: input.system, params: input.params, problem: built.problem, result: outcome.result }, thresholds.values);
   const id = randomUUID();
   const [row] = await tx
     .insert(runs)
@@ -169,6 +182,8 @@ export async function saveRun(tx: Tx, user: { id: string; name: string }, input:
       bathId: input.bathId ?? null,
       verdict: outcome.verdict,
       output: outcome.result ?? null,
+      hazards,
+      thresholdsVersion: thresholds.version,
     })
     .returning();
   if (!row) throw new Error('run not stored');
@@ -177,8 +192,17 @@ export async function saveRun(tx: Tx, user: { id: string; name: string }, input:
     actor: user.id,
     action: 'run.saved',
     subject: `run:${id}`,
-    payload: { calculator: input.calculator, bath: input.bathId ?? null, constants: built.constants.map((c) => c.id), drafts: built.drafts.map((c) => c.id), status: row.status },
+    payload: {
+      calculator: input.calculator,
+      bath: input.bathId ?? null,
+      constants: built.constants.map((c) => c.id),
+      drafts: built.drafts.map((c) => c.id),
+      status: row.status,
+      hazards: hazards.map((h) => h.rule),
+    },
   });
+  // Flagged work goes to the safety desk in the same transaction.
+  if (isFlagged(hazards)) await openReview(tx, { subject: { kind: 'run', runId: id }, hazards, thresholdsVersion: thresholds.version, submittedBy: user.id });
   return runDetail(tx, row, user.name, bathName);
 }
 
@@ -211,13 +235,16 @@ export function runsRouter(ctx: AuthContext): Router {
     const request = calculationRequestSchema.parse(req.body);
     const built = await buildFromLibrary(db, request.system);
     const run = calculate(request.calculator, request.params, built, request.system.pH);
-    res.json(output(calculationOutcomeSchema, run));
+    const thresholds = await currentThresholds(db);
+    const hazards = hazardsOfCalculation({ calculator: request.calculator, system: request.system, params: request.params, problem: built.problem, result: run.result }, thresholds.values);
+    res.json(output(calculationOutcomeSchema, { ...run, hazards }));
   });
 
   router.post('/runs', allow('chemist', 'technician'), async (req: Request, res: Response) => {
     const user = requireUser(res);
     const input = runInputSchema.parse(req.body);
     const run = await db.transaction((tx) => saveRun(tx, user, input));
+    if (run.safety.review?.status === 'pending') await mailWaiting(ctx, req, run.safety.review.id);
     res.status(201).json(output(runSchema, run));
   });
 
@@ -237,7 +264,14 @@ export function runsRouter(ctx: AuthContext): Router {
       .where(and(...where))
       .orderBy(desc(runs.createdAt))
       .limit(RUN_LIST_LIMIT);
-    res.json(output(runListSchema, rows.map((r) => summaryOf(r.run, r.name, r.bathName))));
+    const ids = rows.map((r) => r.run.id);
+    const [thresholds, reviews, released] = [await currentThresholds(db), await reviewsOfRuns(db, ids), await releasedRuns(db, ids)];
+    res.json(
+      output(
+        runListSchema,
+        rows.map((r) => summaryOf(r.run, r.name, r.bathName, { thresholds: thresholds.values, review: reviews.get(r.run.id) ?? null, released: released.has(r.run.id) })),
+      ),
+    );
   });
 
   router.get('/runs/:id', signedIn, async (req: Request, res: Response) => {
