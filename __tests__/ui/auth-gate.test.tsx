@@ -36,7 +36,7 @@ describe('auth gate', () => {
     fireEvent.changeText(screen.getByLabelText('E-mail'), 'Cora@Shop.test ');
     fireEvent.changeText(screen.getByLabelText('Password'), 'a-good-password');
     fireEvent.press(screen.getByRole('button', { name: 'Sign in' }));
-    expect(await screen.findByText('Nothing waiting for review')).toBeOnTheScreen();
+    expect(await screen.findByText('Nothing on the desk')).toBeOnTheScreen();
     expect(view.getPathname()).toBe('/safety');
     expect(screen.getAllByRole('tab')).toHaveLength(5);
     const call = fetchMock.mock.calls.find(([p]) => p === '/api/auth/sign-in');

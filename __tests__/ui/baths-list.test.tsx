@@ -38,6 +38,8 @@ function bath(extra: Partial<BathSummary> = {}): BathSummary {
     createdAt: '2026-02-01T10:00:00.000Z',
     updatedAt: '2026-02-01T10:00:00.000Z',
     archivedAt: null,
+    hazards: [],
+    review: null,
     analysisCount: 4,
     lastAnalysisAt: '2026-03-01T10:00:00.000Z',
     lastAnalysisAgeDays: 3,

@@ -72,7 +72,7 @@ const analysis: Analysis = {
 function open(url: string) {
   const fetchMock = mockApi({
     'POST /api/systems/build': { status: 200, body: built },
-    '/api/baths?status=active': { status: 200, body: [{ ...bath, analysisCount: 1, lastAnalysisAt: analysis.sampledAt, lastAnalysisAgeDays: 2, outOfRange: [] }] },
+    '/api/baths?status=active': { status: 200, body: [{ ...bath, analysisCount: 1, lastAnalysisAt: analysis.sampledAt, lastAnalysisAgeDays: 2, outOfRange: [], hazards: [], review: null }] },
     [keys.bath(BATH_ID)]: { status: 200, body: bath },
     [keys.analyses(BATH_ID)]: { status: 200, body: [analysis] },
   });

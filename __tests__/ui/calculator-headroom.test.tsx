@@ -111,7 +111,7 @@ const analysis: Analysis = {
 };
 
 const bathRoutes: Routes = {
-  '/api/baths?status=active': { status: 200, body: [{ ...bath, analysisCount: 1, lastAnalysisAt: analysis.sampledAt, lastAnalysisAgeDays: 2, outOfRange: [] }] },
+  '/api/baths?status=active': { status: 200, body: [{ ...bath, analysisCount: 1, lastAnalysisAt: analysis.sampledAt, lastAnalysisAgeDays: 2, outOfRange: [], hazards: [], review: null }] },
   [keys.bath(BATH_ID)]: { status: 200, body: bath },
   [keys.analyses(BATH_ID)]: { status: 200, body: [analysis] },
 };
@@ -217,7 +217,11 @@ describe('Headroom', () => {
       usesDrafts: false,
       verdict: '0.1500 mol/L more AgCN(s) dissolves before it persists.',
       bath: { id: BATH_ID, name: bath.name },
+      hazards: [],
+      review: null,
+      released: false,
       output: null,
+      safety: { hazards: [], flagged: false, review: null, released: null },
       inputs: {},
       problem: cyanideBuilt(true).problem,
       engineVersion: '1.0.0',

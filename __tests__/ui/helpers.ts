@@ -1,5 +1,6 @@
 import { type Person, type User } from '@/shared/auth';
 import { type Health } from '@/shared/health';
+import { DEFAULT_THRESHOLDS } from '@/shared/safety';
 
 /** A healthy server reply, as the API would send it. */
 export const healthyReply: Health = { status: 'ok', db: 'up', version: '9.9.9-test' };
@@ -50,6 +51,10 @@ export const DEFAULT_ROUTES: Routes = {
   '/api/constants?dir=asc&sort=reaction&status=approved': { status: 200, body: [] },
   // The bath list's opening view (baths in service), empty.
   '/api/baths?status=active': { status: 200, body: [] },
+  // The safety desk, empty, and the built-in thresholds.
+  '/api/safety/reviews?status=all': { status: 200, body: [] },
+  '/api/safety/reviews?status=pending': { status: 200, body: [] },
+  '/api/safety/thresholds': { status: 200, body: { version: 1, values: DEFAULT_THRESHOLDS, note: 'Built-in defaults (common practice).', createdBy: null, createdAt: '2026-01-01T00:00:00.000Z' } },
 };
 
 /** Mocks fetch with answers per route; anything unlisted answers 404 not_found. Returns the mock to inspect calls. */

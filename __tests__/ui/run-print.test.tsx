@@ -39,6 +39,9 @@ const run = {
   usesDrafts: true,
   verdict: 'Silver is held mostly as Ag(NH3)2+; AgCl(s) is present as a solid.',
   bath: { id: 'bath-rinse', name: 'Rinse tank 1' },
+  hazards: [],
+  review: null,
+  released: false,
   inputs: {
     system: { metals: ['Ag+'], ligands: ['Cl-', 'NH3'], counterIons: [], totals: problem.totals, pH: 9.5, activity: 'davies', includeDrafts: true },
     params: {},
@@ -64,6 +67,7 @@ const run = {
   ],
   warnings: ['Uses 1 draft not yet reviewed.'],
   output: null,
+  safety: { hazards: [], flagged: false, review: null, released: null },
 };
 // A cyanide plating bath with thiosulfate in it too: two more cautions, and no ammonia.
 const cyanideRun = {

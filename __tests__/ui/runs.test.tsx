@@ -12,8 +12,8 @@ const theo = { id: 'u-tech', name: 'Theo Bench' };
 const fixerBath = { id: 'bath-fix', name: 'Fixer tank 2' };
 
 const summaries = [
-  { id: 'run-2', title: 'Fixer tank 2, after top-up', calculator: 'speciation', author: theo, createdAt: '2026-03-04T09:00:00.000Z', status: 'converged', usesDrafts: true, verdict: 'Silver is held mostly as Ag(S2O3)2-3 (> 99 %); no solid forms.', bath: fixerBath },
-  { id: 'run-1', title: '', calculator: 'headroom', author: cora, createdAt: '2026-03-01T15:30:00.000Z', status: 'not_converged', usesDrafts: false, verdict: '', bath: null },
+  { id: 'run-2', title: 'Fixer tank 2, after top-up', calculator: 'speciation', author: theo, createdAt: '2026-03-04T09:00:00.000Z', status: 'converged', usesDrafts: true, verdict: 'Silver is held mostly as Ag(S2O3)2-3 (> 99 %); no solid forms.', bath: fixerBath, hazards: [], review: null, released: false },
+  { id: 'run-1', title: '', calculator: 'headroom', author: cora, createdAt: '2026-03-01T15:30:00.000Z', status: 'not_converged', usesDrafts: false, verdict: '', bath: null, hazards: [], review: null, released: false },
 ];
 
 // Silver chloride in dilute ammonia, as the server stored it when the run was saved.
@@ -65,6 +65,7 @@ const run = {
   ],
   warnings: ['Uses 1 draft not yet reviewed.'],
   output: null,
+  safety: { hazards: [], flagged: false, review: null, released: null },
 };
 // Cora's own headroom run: her chemist account may delete it.
 const headroomRun = {
@@ -79,6 +80,7 @@ const headroomRun = {
   constants: [],
   warnings: [],
   output: null,
+  safety: { hazards: [], flagged: false, review: null, released: null },
 };
 function bath(extra: Partial<BathSummary>): BathSummary {
   return {
@@ -106,6 +108,8 @@ function bath(extra: Partial<BathSummary>): BathSummary {
     createdAt: '2026-02-01T10:00:00.000Z',
     updatedAt: '2026-02-01T10:00:00.000Z',
     archivedAt: null,
+    hazards: [],
+    review: null,
     analysisCount: 0,
     lastAnalysisAt: null,
     lastAnalysisAgeDays: null,
@@ -346,5 +350,64 @@ describe('Saved run', () => {
     fireEvent.press(screen.getByRole('button', { name: 'Delete the run' }));
     expect(await screen.findByText('Only the author of a run, or an admin, can delete it.')).toBeOnTheScreen();
     expect(screen.getByRole('button', { name: 'Delete Fixer tank 2, after top-up' })).toBeOnTheScreen();
+  });
+});
+
+describe('A run and the safety desk', () => {
+  const hazard = {
+    rule: 'cyanide_low_ph',
+    severity: 'danger',
+    flag: true,
+    title: 'Cyanide below pH 11: hydrogen cyanide can escape',
+    text: 'Follow the safety data sheet (SDS), local codes and licensed practice; this caution does not replace them.',
+    evidence: [{ label: 'pH', value: 10 }],
+    ghs: [{ code: 'H330', text: 'Fatal if inhaled' }],
+    pictograms: ['GHS06'],
+    reagents: ['hydrogen cyanide (HCN)'],
+    source: 'common practice',
+  };
+  const review = (status: string, extra: Record<string, unknown> = {}) => ({
+    id: 'rev-1',
+    subject: { kind: 'run', id: 'run-1', title: 'AgCl headroom', calculator: 'headroom' },
+    status,
+    flags: ['cyanide_low_ph'],
+    submittedBy: cora,
+    submittedAt: '2026-03-01T15:30:00.000Z',
+    decidedBy: status === 'pending' ? null : { id: 'u-safe', name: 'Sam Reyes' },
+    decidedAt: status === 'pending' ? null : '2026-03-02T09:00:00.000Z',
+    conditions: null,
+    note: null,
+    ...extra,
+  });
+
+  it('a flagged run waits for the desk and cannot be released; its list row carries the chips', async () => {
+    const held = { ...headroomRun, hazards: [hazard], review: { id: 'rev-1', status: 'pending' }, safety: { hazards: [hazard], flagged: true, review: review('pending'), released: null } };
+    open('/calculate/runs/run-1', { '/api/runs/run-1': { status: 200, body: held } });
+    expect(await screen.findByTestId('run-review-status')).toHaveTextContent('Waiting for the safety desk');
+    expect(screen.getByTestId('release-held')).toBeOnTheScreen();
+    expect(screen.getByTestId('release-run')).toBeDisabled();
+    expect(screen.getByTestId('hazard-banner')).toBeOnTheScreen();
+
+    open('/calculate/runs', { '/api/runs': { status: 200, body: [{ ...summaries[1], hazards: [{ rule: 'cyanide_low_ph', severity: 'danger', flag: true, title: hazard.title }], review: { id: 'rev-1', status: 'pending' } }] } });
+    const row = within(await screen.findByTestId('run-run-1'));
+    expect(row.getByLabelText('Danger: Low pH cyanide')).toBeOnTheScreen();
+    expect(row.getByText('Desk: waiting')).toBeOnTheScreen();
+  });
+
+  it('once signed off, the author sees the conditions and releases it', async () => {
+    let released = false;
+    const signed = review('signed_off', { conditions: 'HCN monitor in the room.' });
+    const state = () => ({ hazards: [hazard], flagged: true, review: signed, released: released ? { by: cora, at: '2026-03-02T10:00:00.000Z', note: '' } : null });
+    const { fetchMock } = open('/calculate/runs/run-1', {
+      '/api/runs/run-1': () => ({ status: 200, body: { ...headroomRun, released, safety: state() } }),
+      'POST /api/runs/run-1/release': () => {
+        released = true;
+        return { status: 200, body: state() };
+      },
+    });
+    expect(await screen.findByTestId('run-review-conditions')).toHaveTextContent('Conditions: HCN monitor in the room.');
+    fireEvent.press(screen.getByTestId('release-run'));
+    expect(await screen.findByTestId('run-released')).toHaveTextContent(/Released by Cora Quill/);
+    expect(sentBodies(fetchMock, 'POST', '/api/runs/run-1/release')).toEqual([{ note: '' }]);
   });
 });

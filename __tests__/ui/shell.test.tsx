@@ -40,7 +40,7 @@ describe('app shell on a phone', () => {
     expect(view.getPathname()).toBe('/library');
 
     fireEvent.press(screen.getByRole('tab', { name: 'Safety' }));
-    expect(await screen.findByText('Nothing waiting for review')).toBeOnTheScreen();
+    expect(await screen.findByText('Nothing on the desk')).toBeOnTheScreen();
     expect(view.getPathname()).toBe('/safety');
 
     fireEvent.press(screen.getByRole('tab', { name: 'Account' }));
@@ -63,7 +63,7 @@ describe('app shell on a phone', () => {
     expect(screen.getByText('Acidified thiosulfate fixer gives off sulfur dioxide')).toBeOnTheScreen();
     expect(screen.getAllByText('DANGER')).toHaveLength(2);
     expect(screen.getAllByText('CAUTION')).toHaveLength(1);
-    expect(screen.getByText(/do not replace the safety data sheet/)).toBeOnTheScreen();
+    expect(screen.getByText(/safety data sheet \(SDS\), local codes and licensed practice/)).toBeOnTheScreen();
   });
 
   it('answers unknown addresses with its own page and a way back to Baths', async () => {

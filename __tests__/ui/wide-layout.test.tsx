@@ -34,7 +34,7 @@ describe('app shell on a wide screen', () => {
     const view = renderRouter('./app', { initialUrl: '/baths' });
     await screen.findByText('No baths recorded yet');
     fireEvent.press(screen.getByRole('tab', { name: 'Safety' }));
-    expect(await screen.findByText('Nothing waiting for review')).toBeOnTheScreen();
+    expect(await screen.findByText('Nothing on the desk')).toBeOnTheScreen();
     expect(view.getPathname()).toBe('/safety');
   });
 

@@ -42,6 +42,12 @@ export const keys = {
   analyses: (bathId: string) => `/api/baths/${encodeURIComponent(bathId)}/analyses`,
   analysesImport: (bathId: string) => `/api/baths/${encodeURIComponent(bathId)}/analyses/import`,
   attachments: (bathId: string) => `/api/baths/${encodeURIComponent(bathId)}/attachments`,
+  thresholds: '/api/safety/thresholds',
+  thresholdsHistory: '/api/safety/thresholds/history',
+  reviews: (status: string) => `/api/safety/reviews?status=${encodeURIComponent(status)}`,
+  review: (id: string) => `/api/safety/reviews/${encodeURIComponent(id)}`,
+  reviewAction: (id: string, action: 'sign-off' | 'send-back' | 'resubmit') => `/api/safety/reviews/${encodeURIComponent(id)}/${action}`,
+  runRelease: (id: string) => `/api/runs/${encodeURIComponent(id)}/release`,
   attachment: (bathId: string, id: string) => `/api/baths/${encodeURIComponent(bathId)}/attachments/${encodeURIComponent(id)}`,
 } as const;
 

@@ -30,11 +30,19 @@ function isBathList(key: unknown): boolean {
   return typeof key === 'string' && (key === BATH_LIST || key.startsWith(`${BATH_LIST}?`));
 }
 
-/** Fetches a bath's analyses and every cached bath list again, after analyses were written. */
+/** Whether an SWR key lists safety reviews (a new analysis can open one). */
+function isReviewList(key: unknown): boolean {
+  return typeof key === 'string' && key.startsWith('/api/safety/reviews?');
+}
+
+/**
+ * Fetches a bath's analyses, the bath itself (its hazards follow the latest analysis), every
+ * cached bath list and the safety desk's lists again, after analyses were written.
+ */
 export function useRevalidateAnalyses(bathId: string) {
   const { mutate } = useSWRConfig();
   return useCallback(
-    () => Promise.all([mutate(keys.analyses(bathId)), mutate(isBathList)]),
+    () => Promise.all([mutate(keys.analyses(bathId)), mutate(keys.bath(bathId)), mutate(isBathList), mutate(isReviewList)]),
     [mutate, bathId],
   );
 }

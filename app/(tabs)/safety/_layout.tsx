@@ -1,6 +1,6 @@
 import { Stack } from 'expo-router';
 
-/** Safety keeps its own stack so detail routes can be pushed inside the tab later. */
+/** Safety keeps its own stack: the desk, a review, and the thresholds. */
 export default function SafetyLayout() {
   return <Stack screenOptions={{ headerShown: false }} />;
 }

@@ -4,6 +4,7 @@ import { AttachmentsSection } from '@/components/screens/bath-detail/attachments
 import { canWriteBaths } from '@/components/screens/bath-detail/bath-actions';
 import { BathHeader } from '@/components/screens/bath-detail/bath-header';
 import { BathLog } from '@/components/screens/bath-detail/bath-log';
+import { BathSafety } from '@/components/screens/bath-detail/bath-safety';
 import { LogActions } from '@/components/screens/bath-detail/log-actions';
 import { LostIcon } from '@/components/shell/icons';
 import { useIsWide } from '@/components/theme/use-is-wide';
@@ -55,6 +56,7 @@ export function BathDetailScreen() {
   return (
     <ScreenContainer title={bath.name} subtitle={bath.status === 'archived' ? `${process} · archived` : process} back={BACK}>
       <BathHeader bath={bath} me={me} />
+      <BathSafety bath={bath} me={me} />
       <BathLog bath={bath} wide={wide} canWrite={canWrite} />
       {canWrite && me ? <LogActions bath={bath} analystName={me.name} /> : null}
       <AttachmentsSection bathId={bath.id} canUpload={canWrite} />

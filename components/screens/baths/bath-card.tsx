@@ -1,6 +1,7 @@
 import { Link } from 'expo-router';
 import { Pressable, StyleSheet, View, type ViewStyle } from 'react-native';
 
+import { HAZARD_SHORT_LABELS, HazardChips } from '@/components/hazards/hazard-chips';
 import { analysedText, bathFlags, bathHref, volumeText } from '@/components/screens/baths/bath-words';
 import { radius, space } from '@/components/theme/tokens';
 import { useTheme } from '@/components/theme/use-theme';
@@ -14,10 +15,10 @@ export function bathLine(b: BathSummary): string {
   return [PROCESS_INFO[b.process].label, b.site.trim() || null, volumeText(b.volume, b.volumeUnit)].filter(Boolean).join(' · ');
 }
 
-/** The bath's state flags as small pills, each one in words (nothing when there is nothing to flag). */
+/** The bath's state flags as small pills, each one in words, then its hazard chips (nothing when there is nothing to flag). */
 export function BathFlags({ bath }: { bath: BathSummary }) {
   const flags = bathFlags(bath);
-  if (flags.length === 0) return null;
+  if (flags.length === 0 && bath.hazards.length === 0 && !bath.review) return null;
   return (
     <View style={styles.flags}>
       {flags.map((f) => (
@@ -25,6 +26,7 @@ export function BathFlags({ bath }: { bath: BathSummary }) {
           <StatusPill kind={f.kind} label={f.label} />
         </View>
       ))}
+      <HazardChips hazards={bath.hazards} review={bath.review} />
     </View>
   );
 }
@@ -35,7 +37,7 @@ export function BathCard({ bath }: { bath: BathSummary }) {
   const focus = useFocusVisible();
   const line = bathLine(bath);
   const analysed = analysedText(bath);
-  const flags = bathFlags(bath).map((f) => f.label);
+  const flags = [...bathFlags(bath).map((f) => f.label), ...bath.hazards.map((h) => HAZARD_SHORT_LABELS[h.rule])];
   return (
     <Link href={bathHref(bath.id)} asChild>
       <Pressable

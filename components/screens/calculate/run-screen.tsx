@@ -7,6 +7,7 @@ import { CALCULATOR_LABELS, runStatus, runTitle } from '@/components/screens/cal
 import { ModelNotes } from '@/components/screens/runs/model-notes';
 import { RunActions } from '@/components/screens/runs/run-actions';
 import { RunResult } from '@/components/screens/runs/run-result';
+import { RunSafety } from '@/components/screens/runs/run-safety';
 import { RunVerdict } from '@/components/screens/runs/run-verdict';
 import { space } from '@/components/theme/tokens';
 import { useIsWide } from '@/components/theme/use-is-wide';
@@ -43,6 +44,7 @@ function RunHead({ run }: { run: Run }) {
       <View style={styles.pills}>
         <StatusPill kind={status.kind} label={status.label} />
         {run.usesDrafts ? <StatusPill kind="warn" label="Uses drafts" /> : null}
+        {run.safety.released ? <StatusPill kind="ok" label="Released" /> : <StatusPill kind="unknown" label="Not released" />}
       </View>
       {run.usesDrafts ? <CautionNote message="This run used draft values that had not been reviewed when it was saved." /> : null}
     </View>
@@ -56,6 +58,7 @@ function RunBody({ run }: { run: Run }) {
     <>
       <RunHead run={run} />
       <RunVerdict verdict={run.verdict} />
+      <RunSafety run={run} me={me} />
       <RunActions run={run} me={me} />
       <View style={wide ? styles.row : styles.stack}>
         <Card style={[styles.card, wide && styles.inputs]}>

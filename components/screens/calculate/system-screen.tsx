@@ -1,6 +1,8 @@
-import { useState } from 'react';
+import { useMemo, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
+import { HazardBanner } from '@/components/hazards/hazard-banner';
+import { useCalculationHazards } from '@/components/hazards/use-calculation-hazards';
 import { CautionNote } from '@/components/screens/calculate/caution-note';
 import { ConstantsUsed } from '@/components/screens/calculate/constants-used';
 import { SaveRunCard } from '@/components/screens/calculate/save-run-card';
@@ -43,6 +45,12 @@ function ResultPanel({ outcome, stale }: { outcome: Outcome | null; stale: boole
     );
   }
   const { built, result, request } = outcome;
+  return <ShownResult outcome={outcome} stale={stale} built={built} result={result} request={request} />;
+}
+
+function ShownResult({ outcome, stale, built, result, request }: { outcome: Outcome; stale: boolean; built: BuiltSystem; result: SolveResult | null; request: SystemRequest }) {
+  const shown = useMemo(() => ({ calculator: 'speciation' as const, request, problem: built.problem, params: {} }), [request, built]);
+  const hazards = useCalculationHazards(shown);
   const draftIds = new Set(built.drafts.map((d) => d.id));
   const constants = built.constants.map((c) => (draftIds.has(c.id) ? { ...c, status: 'draft' as const } : c));
   return (
@@ -51,6 +59,7 @@ function ResultPanel({ outcome, stale }: { outcome: Outcome | null; stale: boole
         Result
       </ThemedText>
       {stale ? <CautionNote testID="stale" message="The inputs changed since this result was worked out. Press Calculate again." /> : null}
+      <HazardBanner hazards={hazards} compact />
       {built.drafts.length > 0 ? (
         <CautionNote message={`This result uses ${built.drafts.length} draft value${built.drafts.length === 1 ? '' : 's'} not yet reviewed.`} />
       ) : null}

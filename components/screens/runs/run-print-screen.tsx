@@ -2,6 +2,7 @@ import Head from 'expo-router/head';
 import { useMemo, type ReactNode } from 'react';
 import { Platform, ScrollView, StyleSheet, View } from 'react-native';
 
+import { HazardSection } from '@/components/hazards/hazard-section';
 import { RunInputs } from '@/components/screens/calculate/run-inputs';
 import { CALCULATOR_LABELS, runStatus, runTitle } from '@/components/screens/calculate/run-words';
 import { ModelNotes } from '@/components/screens/runs/model-notes';
@@ -25,6 +26,7 @@ import { TextLink } from '@/components/ui/text-link';
 import { ThemedText } from '@/components/ui/themed-text';
 import { isClientError } from '@/lib/api/fetcher';
 import { useRun } from '@/lib/api/use-runs';
+import { useReview } from '@/lib/api/use-safety';
 import { type Run } from '@/shared/constants';
 
 /** Widest the printed column grows, px: 180 mm at 96 px per inch, which fits A4 and Letter inside 15 mm margins. */
@@ -39,7 +41,14 @@ function Fact({ label, value }: { label: string; value: string }) {
   );
 }
 
+/** The full hazard section, with the review's history when this reader may open the review. */
+function PrintHazards({ run }: { run: Run }) {
+  const review = useReview(run.safety.review?.id ?? null);
+  return <HazardSection hazards={run.safety.hazards} review={run.safety.review} events={review.data?.events ?? []} />;
+}
+
 function PrintBody({ run }: { run: Run }) {
+  const released = run.safety.released;
   return (
     <>
       <View style={styles.block}>
@@ -55,8 +64,10 @@ function PrintBody({ run }: { run: Run }) {
         <Fact label="Status" value={runStatus(run.status).label} />
         <Fact label="Constants" value={run.usesDrafts ? 'uses drafts that had not been reviewed when it was saved' : 'approved values only'} />
         <Fact label="Engine version" value={run.engineVersion} />
+        <Fact label="Release" value={released ? `released by ${released.by.name}, ${formatWhen(released.at)}` : 'not released'} />
       </View>
       <RunVerdict verdict={run.verdict} />
+      <PrintHazards run={run} />
       <RunInputs inputs={run.inputs} calculator={run.calculator} />
       <RunResult run={run} print />
       <ModelNotes run={run} />

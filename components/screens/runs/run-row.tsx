@@ -1,6 +1,7 @@
 import { Link } from 'expo-router';
 import { Pressable, StyleSheet, View, type ViewStyle } from 'react-native';
 
+import { HAZARD_SHORT_LABELS, HazardChips } from '@/components/hazards/hazard-chips';
 import { CALCULATOR_LABELS, runStatus, runTitle } from '@/components/screens/calculate/run-words';
 import { radius, space } from '@/components/theme/tokens';
 import { useTheme } from '@/components/theme/use-theme';
@@ -23,7 +24,8 @@ export function RunRow({ run, wide }: { run: RunSummary; wide: boolean }) {
   const title = runTitle(run);
   const byline = `${CALCULATOR_LABELS[run.calculator]} · ${run.author.name} · ${formatWhen(run.createdAt)}`;
   const bath = run.bath ? `Bath: ${run.bath.name}` : null;
-  const hint = [byline, bath, status.label, run.usesDrafts ? 'Uses drafts' : null, run.verdict || null].filter(Boolean).join('. ');
+  const hazards = run.hazards.length ? `Hazards: ${run.hazards.map((h) => HAZARD_SHORT_LABELS[h.rule]).join(', ')}` : null;
+  const hint = [byline, bath, status.label, run.usesDrafts ? 'Uses drafts' : null, hazards, run.released ? 'Released' : null, run.verdict || null].filter(Boolean).join('. ');
   return (
     <Link href={runPath(run.id)} asChild>
       <Pressable
@@ -60,7 +62,9 @@ export function RunRow({ run, wide }: { run: RunSummary; wide: boolean }) {
           <View style={styles.pills}>
             <StatusPill kind={status.kind} label={status.label} />
             {run.usesDrafts ? <StatusPill kind="warn" label="Uses drafts" /> : null}
+            {run.released ? <StatusPill kind="ok" label="Released" /> : null}
           </View>
+          <HazardChips hazards={run.hazards} review={run.review} />
         </View>
         <ThemedText variant="title" tone="primary" aria-hidden>
           ›

@@ -1,4 +1,8 @@
+import { useMemo } from 'react';
 import { StyleSheet, View } from 'react-native';
+
+import { HazardBanner } from '@/components/hazards/hazard-banner';
+import { useCalculationHazards } from '@/components/hazards/use-calculation-hazards';
 
 import { CautionNote } from '@/components/screens/calculate/caution-note';
 import { resultViewFor } from '@/components/screens/calculators/result-views';
@@ -47,6 +51,11 @@ function Answer({ outcome, calculator, verdict, csv, display }: Omit<Props, 'out
 
 /** The result column: the verdict first and large, the calculator's own view, the CSV download and the model notes. */
 export function ResultPanel({ outcome, stale, running, failed, emptyHint, ...rest }: Props) {
+  const shown = useMemo(
+    () => (outcome ? { calculator: rest.calculator, request: outcome.request, problem: outcome.built.problem, params: outcome.params, result: outcome.run.result } : null),
+    [outcome, rest.calculator],
+  );
+  const hazards = useCalculationHazards(shown);
   if (!outcome) {
     return (
       <View style={styles.panel} testID="calculator-result">
@@ -63,6 +72,12 @@ export function ResultPanel({ outcome, stale, running, failed, emptyHint, ...res
         Result
       </ThemedText>
       {stale ? <CautionNote testID="stale" message="The inputs changed since this result was worked out. Press Calculate again." /> : null}
+      <HazardBanner hazards={hazards} compact />
+      {hazards.some((h) => h.flag) ? (
+        <ThemedText variant="caption" tone="textMuted" testID="flag-explained">
+          Saved as a run, this goes to the safety desk and cannot be released until a safety officer signs it off.
+        </ThemedText>
+      ) : null}
       <Answer outcome={outcome} {...rest} />
       <ModelNotes outcome={outcome} />
     </View>
