@@ -53,9 +53,13 @@ export function prefillFromBath(bath: Bath, analyses: readonly Analysis[]): Bath
   }
   const totals: Record<string, number> = { [bath.metal]: metal, [bath.ligand]: ligandTotal };
   const ligands = [bath.ligand];
-  if (bath.extras.includes('bromide') && latest?.values.bromide != null) {
+  if (bath.extras.includes('bromide')) {
+    // A fixer always carries the halide it dissolves (AgBr for fixer loading), even when the
+    // analysis did not measure bromide: then it starts at 0 and the calculator adds what dissolves.
     ligands.push('Br-');
-    totals['Br-'] = latest.values.bromide;
+    const bromide = latest?.values.bromide ?? null;
+    totals['Br-'] = bromide ?? 0;
+    if (latest && bromide === null) notes.push('No bromide was analysed: taken as 0.');
   }
   const counterIons: string[] = [];
   const counter = counterIon(bath.ligandAs);

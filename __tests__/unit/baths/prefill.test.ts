@@ -47,4 +47,15 @@ describe('prefillFromBath', () => {
     expect(notes.join(' ')).toMatch(/No pH was analysed/);
     expect(prefillFromBath(bath, []).notes.join(' ')).toMatch(/no analyses yet/);
   });
+
+  it('gives a fixer its bromide, taken as 0 when the analysis did not measure it', () => {
+    const fixer = { metal: 'Ag+', ligand: 'S2O3-2', ligandAs: 'Na2S2O3', extras: ['bromide'], temperatureC: 20 } as unknown as Bath;
+    const measured = prefillFromBath(fixer, [analysis('2026-11-01T12:00:00.000Z', { metal: 0.05, freeLigand: 0.8, bromide: 0.01, pH: 5 })]);
+    expect(measured.system.ligands).toEqual(['S2O3-2', 'Br-']);
+    expect(measured.system.totals?.['Br-']).toBe(0.01);
+    const unmeasured = prefillFromBath(fixer, [analysis('2026-11-02T12:00:00.000Z', { metal: 0.05, freeLigand: 0.8, pH: 5 })]);
+    expect(unmeasured.system.ligands).toEqual(['S2O3-2', 'Br-']);
+    expect(unmeasured.system.totals?.['Br-']).toBe(0);
+    expect(unmeasured.notes.join(' ')).toMatch(/No bromide was analysed: taken as 0/);
+  });
 });
