@@ -1,7 +1,8 @@
 // Baths as a recovery technician uses them, in Chromium against the real server and the seeded demo
 // shop: open the demo fixer bath, upload a CSV of analyses with one bad row (reported clearly,
 // nothing written), upload the valid rows, see the trend and the log take them in, and attach a
-// PDF lab report; at phone and wide sizes. Also a chemist creating a bath.
+// PDF lab report, then read the fixer loading from the new latest analysis; at phone and wide
+// sizes. Also a chemist creating a bath.
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
@@ -98,6 +99,18 @@ describe.each(VIEWPORTS)('the recovery technician at $name size', (viewport) => 
     const mine = list.find((a) => a.title === `Outside lab assay (${viewport.name})`);
     const download = await context.request.get(`${BASE}/api/baths/${bathId}/attachments/${mine?.id}`);
     expect((await download.body()).subarray(0, 8).toString('latin1')).toBe('%PDF-1.4');
+
+    // Fixer loading from the bath's page: filled from the analysis just uploaded (5.6 g/L silver).
+    await page.getByRole('link', { name: 'Fixer loading for Fixer tank B, minilab' }).first().click();
+    await page.waitForURL(/\/calculate\/fixer-loading\?bath=/);
+    await page.getByText(/Filled from Fixer tank B, minilab/).locator('visible=true').first().waitFor();
+    await page.getByRole('button', { name: 'Calculate', exact: true }).locator('visible=true').last().click();
+    const verdict = page.getByTestId('calculator-verdict').locator('visible=true').first();
+    await verdict.waitFor();
+    await verdict.scrollIntoViewIfNeeded();
+    expect(await verdict.innerText()).toMatch(/%/);
+    expect(await verdict.innerText()).not.toMatch(/NaN/);
+    await shoot(page, `${viewport.name}-fixer-loading-after-upload`);
     expect(seen.errors.filter((e) => !/422/.test(e))).toEqual([]);
     await context.close();
   });
