@@ -4,7 +4,7 @@
 // technician reads the fixer loading of the demo fixer bath. Phone and wide sizes.
 import type { BrowserContext, Page } from 'playwright-core';
 
-import { overflowsSideways, shoot, signInByApi, useChromium, VIEWPORTS, watchPage } from '@/__tests__/support/browser';
+import { demoBathId, overflowsSideways, shoot, signedInPage, useChromium, VIEWPORTS, watchPage } from '@/__tests__/support/browser';
 
 const BASE = process.env.LIGANDRY_BROWSER_URL as string;
 const PHONE = VIEWPORTS[0] as (typeof VIEWPORTS)[number];
@@ -14,18 +14,9 @@ jest.setTimeout(180_000);
 
 const browser = useChromium();
 
-async function signedIn(who: string, viewport: { width: number; height: number }): Promise<{ context: BrowserContext; page: Page }> {
-  const context = await browser().newContext({ viewport: { width: viewport.width, height: viewport.height } });
-  await signInByApi(context, BASE, `${who}@ligandry.test`);
-  return { context, page: await context.newPage() };
-}
+const signedIn = (who: string, viewport: { width: number; height: number }) => signedInPage(browser(), BASE, who, viewport);
 
-async function bathId(context: BrowserContext, name: string): Promise<string> {
-  const list = (await (await context.request.get(`${BASE}/api/baths`)).json()) as { id: string; name: string }[];
-  const hit = list.find((b) => b.name === name);
-  if (!hit) throw new Error(`no demo bath ${name}`);
-  return hit.id;
-}
+const bathId = (context: BrowserContext, name: string) => demoBathId(context, BASE, name);
 
 /** Presses Calculate and waits for the verdict; returns its text. */
 async function calculate(page: Page): Promise<string> {

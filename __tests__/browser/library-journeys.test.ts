@@ -8,7 +8,7 @@ import path from 'node:path';
 
 import type { BrowserContext, Page } from 'playwright-core';
 
-import { overflowsSideways, shoot, signInByApi, useChromium, VIEWPORTS, watchPage } from '@/__tests__/support/browser';
+import { overflowsSideways, shoot, signedInPage, useChromium, VIEWPORTS, watchPage } from '@/__tests__/support/browser';
 
 const BASE = process.env.LIGANDRY_BROWSER_URL as string;
 const PHONE = VIEWPORTS[0] as (typeof VIEWPORTS)[number];
@@ -18,11 +18,7 @@ jest.setTimeout(180_000);
 
 const browser = useChromium();
 
-async function signedIn(who: string, viewport: { width: number; height: number }): Promise<{ context: BrowserContext; page: Page }> {
-  const context = await browser().newContext({ viewport: { width: viewport.width, height: viewport.height } });
-  await signInByApi(context, BASE, `${who}@ligandry.test`);
-  return { context, page: await context.newPage() };
-}
+const signedIn = (who: string, viewport: { width: number; height: number }) => signedInPage(browser(), BASE, who, viewport);
 
 type Summary = { id: number; version: number; logValue: number; defines: string; reaction: string };
 

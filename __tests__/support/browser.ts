@@ -74,6 +74,21 @@ export async function signInByApi(context: BrowserContext, base: string, email: 
   if (res.status() !== 200) throw new Error(`sign-in of ${email} answered ${res.status()}: ${await res.text()}`);
 }
 
+/** A new browser context at a viewport, signed in as the demo account `<who>@ligandry.test`, and its first page. */
+export async function signedInPage(browser: Browser, base: string, who: string, viewport: { width: number; height: number }): Promise<{ context: BrowserContext; page: Page }> {
+  const context = await browser.newContext({ viewport: { width: viewport.width, height: viewport.height } });
+  await signInByApi(context, base, `${who}@ligandry.test`);
+  return { context, page: await context.newPage() };
+}
+
+/** The id of the demo bath with this name (as the signed-in context sees the bath list). */
+export async function demoBathId(context: BrowserContext, base: string, name: string): Promise<string> {
+  const list = (await (await context.request.get(`${base}/api/baths`)).json()) as { id: string; name: string }[];
+  const hit = list.find((b) => b.name === name);
+  if (!hit) throw new Error(`no demo bath ${name}`);
+  return hit.id;
+}
+
 /** Whether the page is wider than its viewport (something sticks out sideways). */
 export async function overflowsSideways(page: Page): Promise<boolean> {
   return (await page.evaluate('document.documentElement.scrollWidth > window.innerWidth + 1')) as boolean;

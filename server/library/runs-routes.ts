@@ -140,6 +140,19 @@ async function bathNameOf(tx: Tx, bathId: string | null): Promise<string | null>
   return b?.name ?? null;
 }
 
+/** Locks run `rawId` for a change in `tx`; 404 when the id is malformed, unknown or deleted. */
+export async function lockLiveRun(tx: Tx, rawId: unknown): Promise<RunRow> {
+  const parsed = runIdParam.safeParse(rawId);
+  if (!parsed.success) throw new HttpError(404, 'not_found', `No run with id ${String(rawId)}.`);
+  const [row] = await tx
+    .select()
+    .from(runs)
+    .where(and(eq(runs.id, parsed.data), isNull(runs.deletedAt)))
+    .for('update');
+  if (!row) throw new HttpError(404, 'not_found', `No run with id ${parsed.data}.`);
+  return row;
+}
+
 /** Engine input problems as 400s naming the field of the problem. */
 function solveProblem(problem: unknown, prefix: string): unknown {
   try {
@@ -287,15 +300,8 @@ export function runsRouter(ctx: AuthContext): Router {
 
   router.delete('/runs/:id', signedIn, async (req: Request, res: Response) => {
     const user = requireUser(res);
-    const parsed = runIdParam.safeParse(req.params.id);
-    if (!parsed.success) throw new HttpError(404, 'not_found', `No run with id ${String(req.params.id)}.`);
     await db.transaction(async (tx) => {
-      const [row] = await tx
-        .select()
-        .from(runs)
-        .where(and(eq(runs.id, parsed.data), isNull(runs.deletedAt)))
-        .for('update');
-      if (!row) throw new HttpError(404, 'not_found', `No run with id ${parsed.data}.`);
+      const row = await lockLiveRun(tx, req.params.id);
       if (row.authorId !== user.id && !user.roles.includes('admin')) {
         throw new HttpError(403, 'forbidden', 'Only the author of a run, or an admin, can delete it.');
       }

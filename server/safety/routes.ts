@@ -2,15 +2,16 @@
 // is a new version) and the reviews of flagged runs and baths. Safety officers sign off with
 // conditions or send back with a note, never on their own work; the submitter can resubmit after
 // a send-back. Each step is audited and mailed. Route list: shared/safety.ts.
-import { and, desc, eq, isNull } from 'drizzle-orm';
+import { and, desc, eq } from 'drizzle-orm';
 import { type Request, type Response, Router } from 'express';
 import { z } from 'zod';
 
-import { runReleases, runs, safetyReviewEvents, safetyReviews } from '@/db/schema';
+import { runReleases, safetyReviewEvents, safetyReviews } from '@/db/schema';
 import { allow, requireUser, signedIn } from '@/server/auth/access';
 import type { AuthContext } from '@/server/auth/context';
 import { writeAudit } from '@/server/audit';
 import { HttpError } from '@/server/http-error';
+import { lockLiveRun } from '@/server/library/runs-routes';
 import { output } from '@/server/output';
 import { mailDecision, mailWaiting } from '@/server/safety/notify';
 import {
@@ -153,16 +154,9 @@ export function safetyRouter(ctx: AuthContext): Router {
 
   router.post('/runs/:id/release', signedIn, async (req: Request, res: Response) => {
     const user = requireUser(res);
-    const parsed = idParam.safeParse(req.params.id);
-    if (!parsed.success) throw new HttpError(404, 'not_found', `No run with id ${String(req.params.id)}.`);
     const input = releaseSchema.parse(req.body ?? {});
     const state = await db.transaction(async (tx) => {
-      const [row] = await tx
-        .select()
-        .from(runs)
-        .where(and(eq(runs.id, parsed.data), isNull(runs.deletedAt)))
-        .for('update');
-      if (!row) throw new HttpError(404, 'not_found', `No run with id ${parsed.data}.`);
+      const row = await lockLiveRun(tx, req.params.id);
       if (row.authorId !== user.id && !user.roles.includes('admin')) throw new HttpError(403, 'forbidden', 'Only the author of a run, or an admin, can release it.');
       const [already] = await tx.select().from(runReleases).where(eq(runReleases.runId, row.id));
       if (already) throw new HttpError(409, 'conflict', 'This run is already released.');
