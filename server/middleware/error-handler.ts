@@ -1,22 +1,9 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { ZodError } from 'zod';
 
+import { isConnectionError } from '@/db/client';
 import { HttpError } from '@/server/http-error';
 import type { ErrorBody, ErrorCode } from '@/shared/errors';
-
-// Node and postgres-js error codes that mean the database cannot be reached right now.
-const DB_DOWN_CODES = new Set([
-  'ECONNREFUSED',
-  'ECONNRESET',
-  'ETIMEDOUT',
-  'CONNECT_TIMEOUT',
-  'CONNECTION_CLOSED',
-  'CONNECTION_ENDED',
-  'CONNECTION_DESTROYED',
-  '57P01', // admin_shutdown
-  '57P02', // crash_shutdown
-  '57P03', // cannot_connect_now
-]);
 
 function body(code: ErrorCode, message: string, details?: unknown): ErrorBody {
   return details === undefined ? { error: { code, message } } : { error: { code, message, details } };
@@ -39,10 +26,8 @@ export function toErrorResponse(err: unknown): { status: number; body: ErrorBody
     const limit = e.limit ? ` (limit ${e.limit} bytes)` : '';
     return { status: 413, body: body('payload_too_large', `The request body is too large${limit}.`) };
   }
-  // Drizzle wraps the driver's error: the connection code is on its cause.
-  const cause = (err as { cause?: { code?: string } } | null)?.cause;
-  const dbCode = e?.code ?? cause?.code;
-  if (dbCode && DB_DOWN_CODES.has(dbCode)) {
+  // Drizzle wraps the driver's error (DrizzleQueryError): the connection code may be on its cause.
+  if (isConnectionError(err)) {
     return {
       status: 503,
       body: body('db_unavailable', 'The database is not answering right now. Try again in a moment.'),
