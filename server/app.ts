@@ -12,6 +12,7 @@ import { sessionMiddleware } from '@/server/auth/session';
 import { teamRouter } from '@/server/auth/team-routes';
 import type { Mailer } from '@/server/mail/mailer';
 import { outboxRouter } from '@/server/mail/outbox-routes';
+import { bodyGuard } from '@/server/middleware/body-guard';
 import { apiNotFound, errorHandler } from '@/server/middleware/error-handler';
 import { originCheck } from '@/server/middleware/origin-check';
 import { libraryRouter } from '@/server/library/routes';
@@ -58,7 +59,7 @@ declare global {
   }
 }
 
-/** Builds the Express app (no listen): security headers, logging, body limit, origin check, /api, web app, errors. */
+/** Builds the Express app (no listen): security headers, logging, body limit, origin check, body guard, /api, web app, errors. */
 export function createApp(options: AppOptions): Express {
   const app = express();
   app.disable('x-powered-by');
@@ -96,6 +97,7 @@ export function createApp(options: AppOptions): Express {
   );
   app.use(express.json({ limit: options.jsonLimit ?? '100kb' }));
   app.use(originCheck);
+  app.use(bodyGuard);
 
   const lucia = createLucia(options.db.db, { secure: options.https === true });
   const { publicUrl } = options;

@@ -15,6 +15,8 @@ import { createLogger } from '@/server/logger';
 import { type FakeSmtp, startFakeSmtp } from '@/server/mail/fake-smtp';
 import { createMailer } from '@/server/mail/mailer';
 
+import { createTestDatabase, dropTestDatabase } from './test-db';
+
 export type TestServer = {
   app: Express;
   /** Where this server keeps bath attachments (a temporary folder, removed on close). */
@@ -29,11 +31,16 @@ export type TestServer = {
   close: () => Promise<void>;
 };
 
-/** Starts the app against DATABASE_URL (or `dbUrl`) with a throwaway web build folder. */
+/**
+ * Starts the app against DATABASE_URL (or `dbUrl`) with a throwaway web build folder.
+ * `ownDatabase`: a fresh migrated database for this file alone, dropped on close, for suites whose
+ * requests change what every suite reads (new thresholds versions, retired library constants).
+ */
 export async function startTestServer(
-  options: { dbUrl?: string; webDir?: string; uploadsDir?: string; signInLimits?: SignInLimits; outbox?: boolean } = {},
+  options: { dbUrl?: string; ownDatabase?: boolean; webDir?: string; uploadsDir?: string; signInLimits?: SignInLimits; outbox?: boolean } = {},
 ): Promise<TestServer> {
-  const url = options.dbUrl ?? process.env.DATABASE_URL;
+  const own = options.ownDatabase ? await createTestDatabase('ligandry_own') : null;
+  const url = own ?? options.dbUrl ?? process.env.DATABASE_URL;
   if (!url) throw new Error('DATABASE_URL is not set: the server project global setup makes it.');
   const db = createDb(url, { max: 4, connectTimeoutS: 2 });
   const ownWebDir = !options.webDir;
@@ -76,6 +83,7 @@ export async function startTestServer(
       mailer.close();
       await smtp.close();
       await db.close();
+      if (own) await dropTestDatabase(own);
       if (ownWebDir) fs.rmSync(webDir, { recursive: true, force: true });
       if (ownUploads) fs.rmSync(uploadsDir, { recursive: true, force: true });
     },

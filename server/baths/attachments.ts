@@ -1,7 +1,8 @@
 // Lab reports attached to a bath: PDF, PNG or JPEG (checked by their first bytes, not by what the
-// browser claims), up to 10 MB, kept on disk under the uploads folder with their metadata in
-// PostgreSQL. The file is written to a temporary name and renamed only after the metadata row is
-// inserted in the same transaction; anything that fails half-way leaves neither behind.
+// browser claims; a name that says another of the three is refused), up to 10 MB, kept on disk
+// under the uploads folder with their metadata in PostgreSQL. The file is written to a temporary
+// name and renamed only after the metadata row is inserted in the same transaction; anything that
+// fails half-way leaves neither behind.
 import { createHash, randomUUID } from 'node:crypto';
 import fs from 'node:fs/promises';
 import path from 'node:path';
@@ -27,6 +28,9 @@ const titleSchema = z.string().trim().max(200, 'must be at most 200 characters')
 const idParam = z.string().uuid();
 
 const EXTENSION: Record<AttachmentType, string> = { 'application/pdf': 'pdf', 'image/png': 'png', 'image/jpeg': 'jpg' };
+/** The name endings each accepted type goes by. */
+const NAME_ENDINGS: Record<AttachmentType, readonly string[]> = { 'application/pdf': ['pdf'], 'image/png': ['png'], 'image/jpeg': ['jpg', 'jpeg', 'jpe'] };
+const TYPE_WORDS: Record<AttachmentType, string> = { 'application/pdf': 'a PDF', 'image/png': 'a PNG image', 'image/jpeg': 'a JPEG image' };
 
 /** The type a file really is, from its first bytes; null when it is none of the accepted ones. */
 export function sniffType(buffer: Buffer): AttachmentType | null {
@@ -37,11 +41,26 @@ export function sniffType(buffer: Buffer): AttachmentType | null {
 }
 
 
-/** A file name safe to show and to send back: no folders, no control characters, at most 120 characters. */
+function endingOf(name: string): string | null {
+  return /\.([a-z0-9]{2,5})$/i.exec(name)?.[1]?.toLowerCase() ?? null;
+}
+
+/** Why a file's name contradicts what its bytes are (a PNG named .pdf), or null. */
+function nameMismatch(name: string, type: AttachmentType): string | null {
+  const ending = endingOf(name);
+  const named = (Object.keys(NAME_ENDINGS) as AttachmentType[]).find((t) => ending !== null && NAME_ENDINGS[t].includes(ending));
+  return named && named !== type ? `is named as ${TYPE_WORDS[named]} but is ${TYPE_WORDS[type]}` : null;
+}
+
+/**
+ * A file name safe to show and to send back: no folders, no control characters, at most 120
+ * characters, ending as its type does (a PDF named "Assay 2026.11.20" or "x.exe" gets ".pdf").
+ */
 function cleanName(name: string, type: AttachmentType): string {
   const base = path.basename(name.replace(/\\/g, '/')).replace(/[\u0000-\u001f\u007f"]/g, '').trim();
   const stem = base === '' ? 'report' : base.slice(0, 120);
-  return /\.[a-z0-9]{2,5}$/i.test(stem) ? stem : `${stem}.${EXTENSION[type]}`;
+  const ending = endingOf(stem);
+  return ending !== null && NAME_ENDINGS[type].includes(ending) ? stem : `${stem}.${EXTENSION[type]}`;
 }
 
 function toAttachment(row: AttachmentRow, names: Map<string, string>): Attachment {
@@ -76,6 +95,10 @@ export function attachmentsRouter(ctx: AuthContext, uploadsDir: string): Router 
     const type = sniffType(file.buffer);
     if (!type) {
       throw new HttpError(415, 'validation_failed', `file: "${file.originalname}" is not a PDF, PNG or JPEG file`, [{ path: 'file', message: 'must be a PDF, PNG or JPEG file' }]);
+    }
+    const mismatch = nameMismatch(file.originalname, type);
+    if (mismatch) {
+      throw new HttpError(415, 'validation_failed', `file: "${file.originalname}" ${mismatch}; attach the file it is named as, or rename it`, [{ path: 'file', message: mismatch }]);
     }
     const title = titleSchema.safeParse(typeof req.body?.title === 'string' ? req.body.title : '');
     if (!title.success) throw new HttpError(400, 'validation_failed', `title: ${title.error.issues[0]?.message}`, [{ path: 'title', message: title.error.issues[0]?.message ?? 'invalid' }]);

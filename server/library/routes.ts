@@ -31,7 +31,8 @@ import {
   reviewSchema,
 } from '@/shared/constants';
 
-const idParam = z.coerce.number().int().positive();
+// Ids are PostgreSQL integers: a larger number names no constant (and must not reach the query).
+const idParam = z.coerce.number().int().positive().max(2_147_483_647);
 
 function parseId(req: Request): number {
   const parsed = idParam.safeParse(req.params.id);
