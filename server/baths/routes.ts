@@ -3,7 +3,7 @@
 // the audit log with what it changed.
 import { randomUUID } from 'node:crypto';
 
-import { asc, count, desc, eq, inArray, max } from 'drizzle-orm';
+import { asc, count, desc, eq, max } from 'drizzle-orm';
 import { type Request, type Response, Router } from 'express';
 
 import { analyses, baths, type BathRow } from '@/db/schema';
@@ -18,8 +18,8 @@ import { HttpError } from '@/server/http-error';
 import type { Tx } from '@/server/library/store';
 import { output } from '@/server/output';
 import { mailWaiting } from '@/server/safety/notify';
-import { bathSafety, checkBath, currentThresholds, latestReviewOfBath, safeBathHazards } from '@/server/safety/store';
-import { briefHazards, type ReviewStatus } from '@/shared/safety';
+import { bathSafety, checkBath, currentThresholds, latestReviewsOfBaths, safeBathHazards } from '@/server/safety/store';
+import { briefHazards } from '@/shared/safety';
 import {
   analysisInputSchema,
   analysisListSchema,
@@ -86,12 +86,7 @@ export function bathsRouter(ctx: AuthContext, uploadsDir: string): Router {
     const latestBy = new Map(latest.map((a) => [a.bathId, a]));
     const now = Date.now();
     const thresholds = (await currentThresholds(db)).values;
-    const allAnalyses = picked.length ? await db.select().from(analyses).where(inArray(analyses.bathId, picked.map((r) => r.id))) : [];
-    const reviews = new Map<string, { id: string; status: ReviewStatus }>();
-    for (const r of picked) {
-      const latestReview = await latestReviewOfBath(db, r.id);
-      if (latestReview) reviews.set(r.id, { id: latestReview.id, status: latestReview.status as ReviewStatus });
-    }
+    const reviews = await latestReviewsOfBaths(db, picked.map((r) => r.id));
     const list: BathSummary[] = picked.map((r) => {
       const bath = toBath(r, names);
       const stat = statBy.get(r.id);
@@ -103,7 +98,8 @@ export function bathsRouter(ctx: AuthContext, uploadsDir: string): Router {
         lastAnalysisAt: lastAt?.toISOString() ?? null,
         lastAnalysisAgeDays: lastAt ? calendarDaysBetween(lastAt.getTime(), now) : null,
         outOfRange: last ? outOfRange(bath, valuesOf(last)) : [],
-        hazards: briefHazards(safeBathHazards(bath, allAnalyses.filter((a) => a.bathId === r.id).map((a) => toAnalysis(a, bath, names)), thresholds)),
+        // The rules read the latest analysis only (lib/baths/prefill.ts).
+        hazards: briefHazards(safeBathHazards(bath, last ? [toAnalysis(last, bath, names)] : [], thresholds)),
         review: reviews.get(r.id) ?? null,
       };
     });

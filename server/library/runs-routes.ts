@@ -18,7 +18,7 @@ import { allow, requireUser, signedIn } from '@/server/auth/access';
 import type { AuthContext } from '@/server/auth/context';
 import { writeAudit } from '@/server/audit';
 import { HttpError } from '@/server/http-error';
-import { catalogueOf, libraryConstants, readLibrary, type Tx } from '@/server/library/store';
+import { libraryForBuild, type Tx } from '@/server/library/store';
 import { output } from '@/server/output';
 import { mailWaiting } from '@/server/safety/notify';
 import { currentThresholds, hazardsOfCalculation, openReview, releasedRuns, reviewsOfRuns, runHazards, runSafety } from '@/server/safety/store';
@@ -48,9 +48,9 @@ function unprocessable(field: string, message: string): HttpError {
 
 /** Builds from the library as it is now in `tx`; a selection it cannot build is a 422 naming the field. */
 export async function buildFromLibrary(tx: Tx, request: z.output<typeof systemRequestSchema>): Promise<BuildOutput> {
-  const snap = await readLibrary(tx);
+  const library = await libraryForBuild(tx);
   try {
-    return buildSystem(catalogueOf(snap), libraryConstants(snap), request);
+    return buildSystem(library.catalogue, library.constants, request);
   } catch (e) {
     if (e instanceof BuildError) throw unprocessable(e.field, e.message);
     throw e;

@@ -3,7 +3,7 @@
 // of rows), so lists are read whole and filtered here rather than in SQL.
 import { randomUUID } from 'node:crypto';
 
-import { eq, inArray } from 'drizzle-orm';
+import { eq, inArray, sql } from 'drizzle-orm';
 
 import type { Db } from '@/db/client';
 import { constants, constantTerms, type ConstantRow, species, type SpeciesRow, users } from '@/db/schema';
@@ -186,6 +186,34 @@ export function libraryConstants(snap: LibrarySnapshot): LibraryConstant[] {
     enthalpyKjMol: r.enthalpyKjMol,
     source: r.source,
   }));
+}
+
+/** What the system builder reads: the catalogue and every version. */
+export type BuildInputs = { catalogue: CatalogueEntry[]; constants: LibraryConstant[] };
+
+// The builder's view of the library, kept between requests: every calculation needs it, and
+// reading and mapping the whole library took most of a calculation's time. Rows never change
+// except a status moving forward (triggers, migration 0005), so the counts and id sums per
+// status, with the species and term counts, change whenever anything the builder reads does.
+// The key also names the database, so two databases in one process never share an entry.
+const buildCache = new Map<string, BuildInputs>();
+const BUILD_CACHE_LIMIT = 8;
+
+/** The catalogue and versions for the builder, from memory when the library has not changed since. */
+export async function libraryForBuild(tx: Tx): Promise<BuildInputs> {
+  const result = await tx.execute(sql`select concat_ws('|', current_database(), inet_server_port(),
+      (select count(*) from species), (select count(*) from constant_terms),
+      (select string_agg(status || ':' || n || ':' || ids, ',' order by status) from
+        (select status, count(*) as n, sum(id) as ids from constants group by status) per_status)) as key`);
+  const rows = (Array.isArray(result) ? result : (result as { rows: unknown[] }).rows) as { key: string }[];
+  const key = rows[0]?.key ?? '';
+  const held = buildCache.get(key);
+  if (held) return held;
+  const snap = await readLibrary(tx);
+  const inputs = { catalogue: catalogueOf(snap), constants: libraryConstants(snap) };
+  if (buildCache.size >= BUILD_CACHE_LIMIT) buildCache.delete(buildCache.keys().next().value as string);
+  buildCache.set(key, inputs);
+  return inputs;
 }
 
 /** Every species a constant's reaction touches, following the constants that define its other species. */

@@ -5,6 +5,7 @@ import { randomUUID } from 'node:crypto';
 
 import { and, arrayContains, asc, desc, eq, inArray, sql } from 'drizzle-orm';
 
+import type { Db } from '@/db/client';
 import {
   analyses,
   type BathRow,
@@ -34,6 +35,7 @@ import {
   type HazardThresholds,
   type Review,
   type ReviewAction,
+  type ReviewBrief,
   type ReviewStatus,
   type ReviewSummary,
   type SafetyState,
@@ -42,11 +44,24 @@ import {
 
 export type ThresholdsInForce = { version: number; values: HazardThresholds };
 
+// Versions never change once stored (a trigger refuses it), so each is parsed once per database.
+const thresholdsCache = new Map<string, ThresholdsInForce>();
+
 /** The newest thresholds version (version 1, the defaults, always exists: migration 0010). */
 export async function currentThresholds(tx: Tx): Promise<ThresholdsInForce> {
-  const [row] = await tx.select().from(hazardThresholds).orderBy(desc(hazardThresholds.version)).limit(1);
+  // Every calculation asks: one plain query, the values parsed only when the version is new.
+  const result = await tx.execute(
+    sql`select current_database() || '|' || inet_server_port() || '|' || version as key, version, values from hazard_thresholds order by version desc limit 1`,
+  );
+  const rows = (Array.isArray(result) ? result : (result as { rows: unknown[] }).rows) as { key: string; version: number; values: unknown }[];
+  const row = rows[0];
   if (!row) throw new Error('no hazard thresholds stored (migration 0010 inserts version 1)');
-  return { version: row.version, values: hazardThresholdsSchema.parse(row.values) };
+  const held = thresholdsCache.get(row.key);
+  if (held) return held;
+  const parsed = { version: Number(row.version), values: hazardThresholdsSchema.parse(typeof row.values === 'string' ? JSON.parse(row.values) : row.values) };
+  if (thresholdsCache.size >= 64) thresholdsCache.clear();
+  thresholdsCache.set(row.key, parsed);
+  return parsed;
 }
 
 /** Every thresholds version, newest first. */
@@ -196,6 +211,17 @@ export async function reviewOfRun(tx: Tx, runId: string): Promise<ReviewSummary 
 export async function latestReviewOfBath(tx: Tx, bathId: string): Promise<ReviewRow | null> {
   const [row] = await tx.select().from(safetyReviews).where(eq(safetyReviews.bathId, bathId)).orderBy(desc(safetyReviews.submittedAt)).limit(1);
   return row ?? null;
+}
+
+/** The latest review of each of these baths, by bath id (for lists: one query). */
+export async function latestReviewsOfBaths(tx: Pick<Db, 'selectDistinctOn'>, bathIds: readonly string[]): Promise<Map<string, ReviewBrief>> {
+  if (bathIds.length === 0) return new Map();
+  const rows = await tx
+    .selectDistinctOn([safetyReviews.bathId], { bathId: safetyReviews.bathId, id: safetyReviews.id, status: safetyReviews.status })
+    .from(safetyReviews)
+    .where(inArray(safetyReviews.bathId, [...bathIds]))
+    .orderBy(safetyReviews.bathId, desc(safetyReviews.submittedAt));
+  return new Map(rows.map((r) => [r.bathId ?? '', { id: r.id, status: r.status as ReviewStatus }]));
 }
 
 /** A run's hazards, its review and its release. */
