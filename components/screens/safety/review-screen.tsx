@@ -7,6 +7,7 @@ import { DecideReview, ResubmitReview } from '@/components/screens/safety/review
 import { subjectKindText, subjectTitle } from '@/components/screens/safety/review-list';
 import { LostIcon } from '@/components/shell/icons';
 import { space } from '@/components/theme/tokens';
+import { useIsWide } from '@/components/theme/use-is-wide';
 import { EmptyState } from '@/components/ui/empty-state';
 import { ErrorState } from '@/components/ui/error-state';
 import { formatWhen } from '@/components/ui/format-date';
@@ -50,33 +51,61 @@ function Body({ review, me }: { review: Review; me: User }) {
   const [done, setDone] = useState<string | null>(null);
   const mine = review.submittedBy.id === me.id;
   const officer = hasRole(me, 'safety');
+  const wide = useIsWide();
   const subjectHref = review.subject.kind === 'run' ? `/calculate/runs/${review.subject.id}` : `/baths/${review.subject.id}`;
-  return (
+  const status = (
+    <View style={styles.section} testID="review-status">
+      <ThemedText variant="title" weight="semibold" accessibilityLiveRegion="polite">
+        {REVIEW_STATUS_LABELS[review.status]}
+      </ThemedText>
+      <ThemedText variant="label" weight="regular">
+        {`Sent by ${mine ? 'you' : review.submittedBy.name}, ${formatWhen(review.submittedAt)}; checked against thresholds version ${review.thresholdsVersion}.`}
+      </ThemedText>
+      {review.decidedBy && review.decidedAt ? (
+        <ThemedText variant="label" weight="regular">{`${review.status === 'signed_off' ? 'Signed off' : 'Sent back'} by ${review.decidedBy.name}, ${formatWhen(review.decidedAt)}.`}</ThemedText>
+      ) : null}
+      {review.status === 'signed_off' ? (
+        <ThemedText variant="label" weight="semibold" testID="review-conditions">
+          {review.conditions ? `Conditions: ${review.conditions}` : 'No conditions were set.'}
+        </ThemedText>
+      ) : null}
+      {review.status !== 'signed_off' && review.note ? <ThemedText variant="label" weight="semibold">{`Note: ${review.note}`}</ThemedText> : null}
+      <TextLink href={subjectHref} label={review.subject.kind === 'run' ? 'Open the run' : 'Open the bath'} />
+    </View>
+  );
+  const actions = (
     <>
-      {done ? <Notice kind="success" message={done} testID="review-done" /> : null}
-      <View style={styles.section} testID="review-status">
-        <ThemedText variant="title" weight="semibold" accessibilityLiveRegion="polite">
-          {REVIEW_STATUS_LABELS[review.status]}
-        </ThemedText>
-        <ThemedText variant="label" weight="regular">
-          {`Sent by ${mine ? 'you' : review.submittedBy.name}, ${formatWhen(review.submittedAt)}; checked against thresholds version ${review.thresholdsVersion}.`}
-        </ThemedText>
-        {review.decidedBy && review.decidedAt ? (
-          <ThemedText variant="label" weight="regular">{`${review.status === 'signed_off' ? 'Signed off' : 'Sent back'} by ${review.decidedBy.name}, ${formatWhen(review.decidedAt)}.`}</ThemedText>
-        ) : null}
-        {review.status === 'signed_off' ? (
-          <ThemedText variant="label" weight="semibold" testID="review-conditions">
-            {review.conditions ? `Conditions: ${review.conditions}` : 'No conditions were set.'}
-          </ThemedText>
-        ) : null}
-        {review.status !== 'signed_off' && review.note ? <ThemedText variant="label" weight="semibold">{`Note: ${review.note}`}</ThemedText> : null}
-        <TextLink href={subjectHref} label={review.subject.kind === 'run' ? 'Open the run' : 'Open the bath'} />
-      </View>
-      <HazardBanner hazards={review.hazards} />
       {review.status === 'pending' && officer && !mine ? <DecideReview id={review.id} onDone={setDone} /> : null}
       {review.status === 'pending' && officer && mine ? <Notice kind="info" message="This is your own work: another safety officer signs it off or sends it back." /> : null}
       {review.status === 'sent_back' && mine ? <ResubmitReview id={review.id} onDone={setDone} /> : null}
+    </>
+  );
+  const evidence = (
+    <>
+      <HazardBanner hazards={review.hazards} />
       <Events review={review} />
+    </>
+  );
+  return (
+    <>
+      {done ? <Notice kind="success" message={done} testID="review-done" /> : null}
+      {wide ? (
+        // Wide: the evidence on the left, the status and the decision beside it, so neither scrolls away.
+        <View style={styles.columns}>
+          <View style={[styles.column, styles.evidence]}>{evidence}</View>
+          <View style={[styles.column, styles.decision]}>
+            {status}
+            {actions}
+          </View>
+        </View>
+      ) : (
+        <>
+          {status}
+          <HazardBanner hazards={review.hazards} />
+          {actions}
+          <Events review={review} />
+        </>
+      )}
     </>
   );
 }
@@ -107,4 +136,8 @@ export function ReviewScreen() {
 const styles = StyleSheet.create({
   section: { gap: space.sm },
   event: { gap: space.xxs },
+  columns: { flexDirection: 'row', alignItems: 'flex-start', gap: space.xl },
+  column: { gap: space.md, minWidth: 0 },
+  evidence: { flex: 1.6 },
+  decision: { flex: 1 },
 });
