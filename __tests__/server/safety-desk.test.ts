@@ -166,6 +166,16 @@ describe('a flagged run on the desk', () => {
     expect((await chemist.post(`/api/runs/${run.id}/release`).send({})).status).toBe(200);
   });
 
+  it('a flagged run deleted while it waits leaves the waiting list and is marked deleted elsewhere', async () => {
+    const run = await saveRun(chemist, 'Strike check, deleted later', 10.1);
+    const id = run.safety.review!.id;
+    expect(((await safety.get('/api/safety/reviews')).body as { id: string }[]).some((r) => r.id === id)).toBe(true);
+    expect((await chemist.delete(`/api/runs/${run.id}`)).status).toBe(204);
+    expect(((await safety.get('/api/safety/reviews')).body as { id: string }[]).some((r) => r.id === id)).toBe(false);
+    const all = (await safety.get('/api/safety/reviews?status=all')).body as { id: string; subject: { title: string } }[];
+    expect(all.find((r) => r.id === id)?.subject.title).toBe('Strike check, deleted later (deleted)');
+  });
+
   it('unknown and malformed review ids are 404s; bad decisions name the field', async () => {
     expect((await safety.get('/api/safety/reviews/not-a-uuid')).status).toBe(404);
     expect((await safety.post('/api/safety/reviews/00000000-0000-4000-8000-000000000000/sign-off').send({})).status).toBe(404);

@@ -2,7 +2,7 @@
 // is a new version) and the reviews of flagged runs and baths. Safety officers sign off with
 // conditions or send back with a note, never on their own work; the submitter can resubmit after
 // a send-back. Each step is audited and mailed. Route list: shared/safety.ts.
-import { and, desc, eq } from 'drizzle-orm';
+import { and, desc, eq, sql } from 'drizzle-orm';
 import { type Request, type Response, Router } from 'express';
 import { z } from 'zod';
 
@@ -89,6 +89,8 @@ export function safetyRouter(ctx: AuthContext): Router {
     const q = reviewQuerySchema.parse(req.query);
     const where = [];
     if (q.status !== 'all') where.push(eq(safetyReviews.status, q.status));
+    // A run deleted while it waited needs no decision; the other lists still show it, marked deleted.
+    if (q.status === 'pending') where.push(sql`not exists (select 1 from runs r where r.id = ${safetyReviews.runId} and r.deleted_at is not null)`);
     if (!canSeeAll(user)) where.push(eq(safetyReviews.submittedBy, user.id));
     const rows = await db
       .select()

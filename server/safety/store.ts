@@ -154,19 +154,27 @@ async function peopleNames(tx: Tx, ids: readonly (string | null)[]): Promise<Nam
 
 const person = (id: string, names: Names) => ({ id, name: names.get(id) ?? 'Unknown' });
 
+/** A run's title as the desk shows it; a run deleted since it was flagged says so. */
+function runTitleOf(run: { title: string; deletedAt: Date | null } | undefined): string {
+  if (!run) return '';
+  return run.deletedAt ? `${run.title.trim() || 'Untitled run'} (deleted)` : run.title;
+}
+
 /** Review rows as summaries, with people's names and the subject's title. */
 export async function reviewSummaries(tx: Tx, rows: readonly ReviewRow[]): Promise<ReviewSummary[]> {
   if (rows.length === 0) return [];
   const names = await peopleNames(tx, rows.flatMap((r) => [r.submittedBy, r.decidedBy]));
   const runIds = rows.flatMap((r) => (r.runId ? [r.runId] : []));
   const bathIds = rows.flatMap((r) => (r.bathId ? [r.bathId] : []));
-  const runRows = runIds.length ? await tx.select({ id: runs.id, title: runs.title, calculator: runs.calculator }).from(runs).where(inArray(runs.id, runIds)) : [];
+  const runRows = runIds.length
+    ? await tx.select({ id: runs.id, title: runs.title, calculator: runs.calculator, deletedAt: runs.deletedAt }).from(runs).where(inArray(runs.id, runIds))
+    : [];
   const bathRows = bathIds.length ? await tx.select({ id: baths.id, name: baths.name, process: baths.process }).from(baths).where(inArray(baths.id, bathIds)) : [];
   const runBy = new Map(runRows.map((r) => [r.id, r]));
   const bathBy = new Map(bathRows.map((b) => [b.id, b]));
   return rows.map((r) => {
     const subject: ReviewSummary['subject'] = r.runId
-      ? { kind: 'run', id: r.runId, title: runBy.get(r.runId)?.title ?? '', calculator: runBy.get(r.runId)?.calculator ?? '' }
+      ? { kind: 'run', id: r.runId, title: runTitleOf(runBy.get(r.runId)), calculator: runBy.get(r.runId)?.calculator ?? '' }
       : { kind: 'bath', id: r.bathId ?? '', title: bathBy.get(r.bathId ?? '')?.name ?? 'Unknown bath', process: bathBy.get(r.bathId ?? '')?.process ?? '' };
     return {
       id: r.id,
