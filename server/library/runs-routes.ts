@@ -21,8 +21,8 @@ import { HttpError } from '@/server/http-error';
 import { libraryForBuild, type Tx } from '@/server/library/store';
 import { output } from '@/server/output';
 import { mailWaiting } from '@/server/safety/notify';
-import { currentThresholds, hazardsOfCalculation, openReview, releasedRuns, reviewsOfRuns, runHazards, runSafety } from '@/server/safety/store';
-import { isFlagged } from '@/lib/hazards';
+import { currentThresholds, openReview, releasedRuns, reviewsOfRuns, runHazards, runSafety } from '@/server/safety/store';
+import { calculationHazards, isFlagged } from '@/lib/hazards';
 import { briefHazards, type HazardThresholds, type ReviewStatus } from '@/shared/safety';
 import { calculationOutcomeSchema, calculationRequestSchema, type CalculatorKey, PARAMS_SCHEMAS } from '@/shared/calculations';
 import {
@@ -108,9 +108,10 @@ async function runDetail(tx: Tx, row: RunRow, authorName: string, bathName: stri
   const now = used.length ? await tx.select().from(constants) : [];
   const byId = new Map(now.map((c) => [c.id, c]));
   const approvedByLineage = new Map(now.filter((c) => c.status === 'approved').map((c) => [c.lineageId, c]));
-  const safety = await runSafety(tx, row);
+  const thresholds = (await currentThresholds(tx)).values;
+  const safety = await runSafety(tx, row, thresholds);
   return {
-    ...summaryOf(row, authorName, bathName, { thresholds: (await currentThresholds(tx)).values, review: safety.review, released: safety.released !== null }),
+    ...summaryOf(row, authorName, bathName, { thresholds, review: safety.review, released: safety.released !== null }),
     safety,
     inputs: row.inputs as Record<string, unknown>,
     problem: row.problem as Run['problem'],
@@ -175,7 +176,7 @@ export async function saveRun(tx: Tx, user: { id: string; name: string }, input:
   const result = solveOrExplain(built, input.system.pH);
   const outcome = calculate(input.calculator, input.params, built, input.system.pH);
   const thresholds = await currentThresholds(tx);
-  const hazards = hazardsOfCalculation({ calculator: input.calculator, system: input.system, params: input.params, problem: built.problem, result: outcome.result }, thresholds.values);
+  const hazards = calculationHazards({ calculator: input.calculator, system: input.system, params: input.params, problem: built.problem, outcome: { result: outcome.result } }, thresholds.values);
   const id = randomUUID();
   const [row] = await tx
     .insert(runs)
@@ -249,7 +250,7 @@ export function runsRouter(ctx: AuthContext): Router {
     const built = await buildFromLibrary(db, request.system);
     const run = calculate(request.calculator, request.params, built, request.system.pH);
     const thresholds = await currentThresholds(db);
-    const hazards = hazardsOfCalculation({ calculator: request.calculator, system: request.system, params: request.params, problem: built.problem, result: run.result }, thresholds.values);
+    const hazards = calculationHazards({ calculator: request.calculator, system: request.system, params: request.params, problem: built.problem, outcome: { result: run.result } }, thresholds.values);
     res.json(output(calculationOutcomeSchema, { ...run, hazards }));
   });
 

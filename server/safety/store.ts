@@ -26,7 +26,7 @@ import { HttpError } from '@/server/http-error';
 import type { Tx } from '@/server/library/store';
 import type { Bath } from '@/shared/baths';
 import type { CalculatorKey } from '@/shared/calculators';
-import type { ProblemJson, SystemRequest } from '@/shared/constants';
+import type { ProblemJson } from '@/shared/constants';
 import { systemRequestSchema } from '@/shared/constants';
 import {
   type Hazard,
@@ -132,15 +132,6 @@ export function runHazards(row: RunRow, thresholds: HazardThresholds): Hazard[] 
   } catch {
     return [];
   }
-}
-
-/** The hazards of a calculation about to be saved or shown. */
-export function hazardsOfCalculation(
-  input: { calculator: CalculatorKey; system: SystemRequest; params: unknown; problem: ProblemJson; result: unknown },
-  thresholds: HazardThresholds,
-): Hazard[] {
-  const system = systemRequestSchema.parse(input.system);
-  return calculationHazards({ calculator: input.calculator, system, params: input.params, problem: input.problem, outcome: { result: input.result } }, thresholds);
 }
 
 type Names = Map<string, string>;
@@ -259,10 +250,15 @@ export async function releasedRuns(tx: Tx, runIds: readonly string[]): Promise<S
   return new Set(rows.map((r) => r.id));
 }
 
+/** The bath's latest analysis (by sampling time, as lib/baths/prefill.ts takes it), as a list of at most one: the rules read nothing older. */
+async function latestAnalysisOf(tx: Tx, bath: Bath): Promise<ReturnType<typeof toAnalysis>[]> {
+  const rows = await tx.select().from(analyses).where(eq(analyses.bathId, bath.id)).orderBy(desc(analyses.sampledAt), desc(analyses.createdAt)).limit(1);
+  return rows.map((a) => toAnalysis(a, bath, new Map()));
+}
+
 /** A bath's hazards from its latest analysis, with its latest review. */
 export async function bathSafety(tx: Tx, bath: Bath, thresholds?: HazardThresholds): Promise<SafetyState> {
-  const rows = await tx.select().from(analyses).where(eq(analyses.bathId, bath.id));
-  const hazards = safeBathHazards(bath, rows.map((a) => toAnalysis(a, bath, new Map())), thresholds ?? (await currentThresholds(tx)).values);
+  const hazards = safeBathHazards(bath, await latestAnalysisOf(tx, bath), thresholds ?? (await currentThresholds(tx)).values);
   const latest = await latestReviewOfBath(tx, bath.id);
   const [review] = latest ? await reviewSummaries(tx, [latest]) : [];
   return { hazards, flagged: isFlagged(hazards), review: review ?? null, released: null };
@@ -286,8 +282,7 @@ export async function checkBath(tx: Tx, bathRow: BathRow, userId: string): Promi
   await tx.execute(sql`select id from baths where id = ${bathRow.id} for update`);
   const bath = await bathOf(tx, bathRow);
   const thresholds = await currentThresholds(tx);
-  const rows = await tx.select().from(analyses).where(eq(analyses.bathId, bath.id));
-  const hazards = safeBathHazards(bath, rows.map((a) => toAnalysis(a, bath, new Map())), thresholds.values);
+  const hazards = safeBathHazards(bath, await latestAnalysisOf(tx, bath), thresholds.values);
   const flags = flagsOf(hazards);
   if (flags.length === 0) return null;
   const latest = await latestReviewOfBath(tx, bath.id);
