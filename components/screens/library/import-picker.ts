@@ -1,24 +1,11 @@
-import { getDocumentAsync } from 'expo-document-picker';
-import { useCallback } from 'react';
+import { type FileKinds, type PickedFile, useFilePicker } from '@/components/ui/file-picker';
 
-import { type UploadFile } from '@/lib/api/use-import';
+export type { PickedFile } from '@/components/ui/file-picker';
 
-/** A file chosen for import: its name, its size in bytes when known, and the part to upload. */
-export type PickedFile = { name: string; size: number | null; part: UploadFile };
+/** CSV files: by ending and type in the browser; on a phone under their usual types, and plain text. */
+const CSV_KINDS: FileKinds = { accept: '.csv,text/csv', types: ['text/csv', 'text/comma-separated-values', 'text/plain'], fallbackType: 'text/csv' };
 
-/** Types offered by the phone's document chooser: CSV under its usual names, and plain text. */
-export const CSV_TYPES = ['text/csv', 'text/comma-separated-values', 'text/plain'];
-
-/** Opens the phone's document chooser for one CSV file; resolves null when the person cancels. */
+/** Opens the file chooser for one CSV file; resolves null when the person cancels. */
 export function useCsvPicker(): () => Promise<PickedFile | null> {
-  return useCallback(async () => {
-    const picked = await getDocumentAsync({ type: CSV_TYPES, copyToCacheDirectory: true, multiple: false });
-    const asset = picked.canceled ? undefined : picked.assets[0];
-    if (!asset) return null;
-    return {
-      name: asset.name,
-      size: typeof asset.size === 'number' ? asset.size : null,
-      part: { uri: asset.uri, name: asset.name, type: asset.mimeType ?? 'text/csv' },
-    };
-  }, []);
+  return useFilePicker(CSV_KINDS);
 }

@@ -1,25 +1,22 @@
 import { useCallback, useEffect, useRef } from 'react';
 
-import { type UploadFile } from '@/lib/api/use-import';
+import { type FileKinds, type PickedFile } from './file-picker';
 
-/** A file chosen for import: its name, its size in bytes when known, and the part to upload. */
-export type PickedFile = { name: string; size: number | null; part: UploadFile };
-
-/** What the browser's file chooser offers. */
-export const CSV_ACCEPT = '.csv,text/csv';
+export type { FileKinds, PickedFile } from './file-picker';
 
 /**
- * Opens the browser's file chooser for one CSV file through a hidden <input type="file">, kept in
- * the page while the screen is open; resolves null when the person cancels.
+ * Opens the browser's file chooser for one file of the kinds through a hidden <input type="file">,
+ * kept in the page while the screen is open; resolves null when the person cancels.
  */
-export function useCsvPicker(): () => Promise<PickedFile | null> {
+export function useFilePicker(kinds: FileKinds): () => Promise<PickedFile | null> {
+  const { accept } = kinds;
   const input = useRef<HTMLInputElement | null>(null);
   const settle = useRef<((file: PickedFile | null) => void) | null>(null);
 
   useEffect(() => {
     const el = document.createElement('input');
     el.type = 'file';
-    el.accept = CSV_ACCEPT;
+    el.accept = accept;
     el.hidden = true;
     el.tabIndex = -1;
     el.setAttribute('aria-hidden', 'true');
@@ -29,7 +26,7 @@ export function useCsvPicker(): () => Promise<PickedFile | null> {
     };
     const onChange = () => {
       const file = el.files?.[0];
-      done(file ? { name: file.name, size: file.size, part: file } : null);
+      done(file ? { name: file.name, size: file.size, type: file.type || null, part: file } : null);
     };
     const onCancel = () => done(null);
     el.addEventListener('change', onChange);
@@ -42,7 +39,7 @@ export function useCsvPicker(): () => Promise<PickedFile | null> {
       el.remove();
       input.current = null;
     };
-  }, []);
+  }, [accept]);
 
   return useCallback(
     () =>
