@@ -3,14 +3,12 @@ import { fireEvent, renderRouter, screen, waitFor, within } from 'expo-router/te
 
 import { placeApiError, placeCalculatorError } from '@/components/screens/calculators/frame/errors';
 import { ApiError } from '@/lib/api/fetcher';
-import { keys } from '@/lib/api/keys';
 import { CalculatorInputError } from '@/lib/calculators/errors';
-import { type Analysis, type Bath } from '@/shared/baths';
 
+import { BATH_ID, bathRoutes, silverAnalysis, silverBath } from './bath-fixtures';
 import { chemist, errorBody, mockApi, sentBodies, type Routes } from './helpers';
 
 const phone = Dimensions.get('window');
-const BATH_ID = '4b6f7a52-8d3e-4c1a-9f0e-2a5b6c7d8e9f';
 
 const use = (id: number, reaction: string, logValue: number, kind = 'cumulative_formation') => ({
   id,
@@ -69,52 +67,9 @@ const fixerBuilt = {
 
 const buildRoute = (body: unknown) => ({ status: 200, body: cyanideBuilt((body as { pH?: number }).pH !== undefined) });
 
-const bath: Bath = {
-  id: BATH_ID,
-  name: 'Silver line tank 2',
-  process: 'cyanide_silver_plate',
-  status: 'active',
-  volume: 400,
-  volumeUnit: 'L',
-  volumeL: 400,
-  temperatureC: 25,
-  makeUp: [],
-  metal: 'Ag+',
-  ligand: 'CN-',
-  metalUnit: 'g/L',
-  ligandUnit: 'g/L',
-  ligandAs: 'KCN',
-  carbonateAs: 'K2CO3',
-  extras: ['carbonate'],
-  targets: { metal: { min: null, max: null }, freeLigand: { min: null, max: null }, pH: { min: null, max: null } },
-  site: '',
-  owner: { id: 'u-chem', name: 'Cora Quill' },
-  notes: '',
-  createdBy: { id: 'u-chem', name: 'Cora Quill' },
-  createdAt: '2026-01-10T09:00:00.000Z',
-  updatedAt: '2026-01-10T09:00:00.000Z',
-  archivedAt: null,
-};
-
-const analysis: Analysis = {
-  id: 'a-1',
-  bathId: BATH_ID,
-  sampledAt: '2026-03-16T00:00:00.000Z',
-  analyst: 'Cora Quill',
-  values: { metal: 0.1, freeLigand: 0.15, totalLigand: null, pH: 12, carbonate: null, bromide: null },
-  entered: {},
-  notes: '',
-  source: 'manual',
-  enteredBy: { id: 'u-chem', name: 'Cora Quill' },
-  createdAt: '2026-03-16T00:00:00.000Z',
-  outOfRange: [],
-};
-
-const bathRoutes: Routes = {
-  '/api/baths?status=active': { status: 200, body: [{ ...bath, analysisCount: 1, lastAnalysisAt: analysis.sampledAt, lastAnalysisAgeDays: 2, outOfRange: [], hazards: [], review: null }] },
-  [keys.bath(BATH_ID)]: { status: 200, body: bath },
-  [keys.analyses(BATH_ID)]: { status: 200, body: [analysis] },
-};
+const bath = silverBath();
+const analysis = silverAnalysis;
+const tankRoutes: Routes = bathRoutes(bath);
 
 function open(url: string, routes: Routes = {}) {
   const fetchMock = mockApi({ 'POST /api/systems/build': buildRoute, ...routes });
@@ -231,7 +186,7 @@ describe('Headroom', () => {
     };
     let save: 'bad' | 'ok' = 'bad';
     const fetchMock = open(`/calculate/headroom?bath=${BATH_ID}`, {
-      ...bathRoutes,
+      ...tankRoutes,
       'POST /api/runs': () =>
         save === 'bad'
           ? { status: 422, body: errorBody('validation_failed', 'params.solid: not a solid', [{ path: 'params.solid', message: '"AgCN(s)" is not a solid of the system' }]) }

@@ -3,80 +3,17 @@ import { fireEvent, renderRouter, screen, within } from 'expo-router/testing-lib
 
 import { makeUpVerdict } from '@/components/screens/calculators/make-up/make-up-words';
 import { RESULT_VIEWS } from '@/components/screens/calculators/result-views';
-import { keys } from '@/lib/api/keys';
 import { runCalculation } from '@/lib/calculators/run-calculation';
 import { PARAMS_SCHEMAS } from '@/shared/calculations';
-import { type Analysis, type Bath } from '@/shared/baths';
 
+import { BATH_ID, bathRoutes, cyanideSilverBuilt, silverBath } from './bath-fixtures';
 import { mockApi, sentBodies } from './helpers';
 
-const BATH_ID = '4b6f7a52-8d3e-4c1a-9f0e-2a5b6c7d8e9f';
-
-// Cyanide silver at pH 12 with potassium: 0.0912 mol/L free cyanide at the start (worked out by the engine).
-const problem = {
-  components: ['Ag+', 'CN-', 'K+', 'H+'],
-  totals: { 'Ag+': 0.1, 'CN-': 0.35, 'K+': 0.35 },
-  fixed: { 'H+': 1e-12 },
-  species: [
-    { name: 'Ag(CN)2-', logK: 20.48, stoich: { 'Ag+': 1, 'CN-': 2 } },
-    { name: 'Ag(CN)3-2', logK: 21.4, stoich: { 'Ag+': 1, 'CN-': 3 } },
-    { name: 'HCN', logK: 9.21, stoich: { 'H+': 1, 'CN-': 1 } },
-  ],
-  solids: [{ name: 'AgCN(s)', logKsp: -15.66, stoich: { 'Ag+': 1, 'CN-': 1 } }],
-  activity: 'davies',
-  temperatureC: 25,
-};
-
-const built = { problem, constants: [], drafts: [], availableSolids: ['AgCN(s)'], warnings: [] };
-
-const bath = {
-  id: BATH_ID,
-  name: 'Silver line tank 2',
-  process: 'cyanide_silver_plate',
-  status: 'active',
-  volume: 1200,
-  volumeUnit: 'L',
-  volumeL: 1200,
-  temperatureC: 25,
-  makeUp: [],
-  metal: 'Ag+',
-  ligand: 'CN-',
-  metalUnit: 'g/L',
-  ligandUnit: 'g/L',
-  ligandAs: 'KCN',
-  carbonateAs: 'K2CO3',
-  extras: ['carbonate'],
-  targets: { metal: { min: null, max: null }, freeLigand: { min: null, max: null }, pH: { min: null, max: null } },
-  site: '',
-  owner: { id: 'u-chem', name: 'Cora Quill' },
-  notes: '',
-  createdBy: { id: 'u-chem', name: 'Cora Quill' },
-  createdAt: '2026-01-10T09:00:00.000Z',
-  updatedAt: '2026-01-10T09:00:00.000Z',
-  archivedAt: null,
-} satisfies Bath;
-
-const analysis: Analysis = {
-  id: 'a-1',
-  bathId: BATH_ID,
-  sampledAt: '2026-03-16T00:00:00.000Z',
-  analyst: 'Cora Quill',
-  values: { metal: 0.1, freeLigand: 0.15, totalLigand: null, pH: 12, carbonate: null, bromide: null },
-  entered: {},
-  notes: '',
-  source: 'manual',
-  enteredBy: { id: 'u-chem', name: 'Cora Quill' },
-  createdAt: '2026-03-16T00:00:00.000Z',
-  outOfRange: [],
-};
+const built = cyanideSilverBuilt;
+const bath = silverBath({ volume: 1200, volumeL: 1200 });
 
 function open(url: string) {
-  const fetchMock = mockApi({
-    'POST /api/systems/build': { status: 200, body: built },
-    '/api/baths?status=active': { status: 200, body: [{ ...bath, analysisCount: 1, lastAnalysisAt: analysis.sampledAt, lastAnalysisAgeDays: 2, outOfRange: [], hazards: [], review: null }] },
-    [keys.bath(BATH_ID)]: { status: 200, body: bath },
-    [keys.analyses(BATH_ID)]: { status: 200, body: [analysis] },
-  });
+  const fetchMock = mockApi({ 'POST /api/systems/build': { status: 200, body: built }, ...bathRoutes(bath) });
   renderRouter('./app', { initialUrl: url });
   return fetchMock;
 }
