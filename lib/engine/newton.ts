@@ -25,6 +25,8 @@ const MAX_BACKTRACKS = DEFAULTS.maxBacktracks;
 const FALLBACK_SWEEPS = DEFAULTS.fallbackSweeps;
 /** Mass residual below which s = sqrt(I) joins the Newton system (see maybeActivateIon). */
 const ION_ACTIVATE_BELOW = 1e-2;
+/** Start-up sweeps stop once one shrinks the distance by less than this factor (see relax). */
+const RELAX_SLOW = 0.7;
 // NOTE: module-level copies of imported functions: under a CommonJS transform (tsx, jest) an
 // imported function is read through a getter at each call, and evaluate() runs thousands of times.
 const phiAt = daviesPhi;
@@ -655,7 +657,15 @@ export class Assemblage {
    * into the region where full Newton converges fast. Expects a current evaluation.
    */
   relax(maxSweeps: number, target: number): void {
-    for (let sweep = 0; sweep < maxSweeps && this.distance() > target; sweep++) {
+    let previous = Infinity;
+    for (let sweep = 0; sweep < maxSweeps; sweep++) {
+      const now = this.distance();
+      if (!(now > target)) break;
+      // Without solids, a sweep that gains little means coupled balances (a metal and its ligand
+      // both mostly in complexes) zigzagging: Newton moves along them at once and does better.
+      // With solids the sweeps are kept to the target: Newton starts worse there.
+      if (this.p === 0 && now > RELAX_SLOW * previous) break;
+      previous = now;
       let moved = false;
       for (let k = 0; k < this.m; k++) {
         const t = this.T[k] as number;
@@ -888,6 +898,11 @@ export class Assemblage {
 }
 
 const pool = new Map<string, Assemblage>();
+/** The space handed out last and its sizes. */
+let last: Assemblage | null = null;
+let lastNc = -1;
+let lastNs = -1;
+let lastNsol = -1;
 
 /**
  * A work space configured for this tableau and set of solids. Spaces are pooled by size and
@@ -895,12 +910,20 @@ const pool = new Map<string, Assemblage>();
  * a size is valid, and callers copy what they keep.
  */
 export function assemblageFor(tab: Tableau, absent: ArrayLike<number>, present: readonly number[]): Assemblage {
-  const key = `${tab.nc},${tab.ns},${tab.nsol}`;
-  let space = pool.get(key);
+  // The phase loop asks for the same size many times running: check the last one before keying the pool.
+  let space = last !== null && lastNc === tab.nc && lastNs === tab.ns && lastNsol === tab.nsol ? last : undefined;
   if (!space) {
-    if (pool.size >= 32) pool.clear();
-    space = new Assemblage(tab.nc, tab.ns, tab.nsol);
-    pool.set(key, space);
+    const key = `${tab.nc},${tab.ns},${tab.nsol}`;
+    space = pool.get(key);
+    if (!space) {
+      if (pool.size >= 32) pool.clear();
+      space = new Assemblage(tab.nc, tab.ns, tab.nsol);
+      pool.set(key, space);
+    }
+    last = space;
+    lastNc = tab.nc;
+    lastNs = tab.ns;
+    lastNsol = tab.nsol;
   }
   return space.configure(tab, absent, present);
 }

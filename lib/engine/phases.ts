@@ -266,14 +266,25 @@ function searchCandidates(tab: Tableau, possible: number[], involved: readonly n
   return all.length <= 10 ? all : [...involved];
 }
 
-function clampNegligible(asm: Assemblage): void {
-  for (let r = 0; r < asm.p; r++) if ((asm.n[r] as number) < 0) asm.n[r] = 0;
+/** Clears solid amounts a hair below zero; true if any was. */
+function clampNegligible(asm: Assemblage): boolean {
+  let changed = false;
+  for (let r = 0; r < asm.p; r++) {
+    if ((asm.n[r] as number) < 0) {
+      asm.n[r] = 0;
+      changed = true;
+    }
+  }
+  return changed;
 }
 
-/** The loop's outcome with this assemblage (amounts a hair below zero cleared if converged). */
-function finishWith(loop: PhaseLoop, asm: Assemblage, converged: boolean, message?: string): PhaseOutcome {
-  if (converged) clampNegligible(asm);
-  loop.save(asm);
+/**
+ * The loop's outcome with this assemblage (amounts a hair below zero cleared if converged).
+ * `saved`: the loop already saved this assemblage's state (saved again only if a clamp changed it).
+ */
+function finishWith(loop: PhaseLoop, asm: Assemblage, converged: boolean, message?: string, saved = false): PhaseOutcome {
+  if (converged && clampNegligible(asm)) saved = false;
+  if (!saved) loop.save(asm);
   return { asm, converged, message, iterations: loop.iterations, possible: loop.possible, state: loop.cur, trace: loop.trace };
 }
 
@@ -347,9 +358,9 @@ export function settlePhases(tab: Tableau, opts: { tolerance: number; maxIterati
       continue;
     }
     if (blocked.length > 0 && loop.mostSupersaturated(asm, NO_SOLIDS) >= 0) {
-      return finishWith(loop, asm, false, 'A supersaturated solid could not be added: its formula is not independent of the solids present (phase rule).');
+      return finishWith(loop, asm, false, 'A supersaturated solid could not be added: its formula is not independent of the solids present (phase rule).', true);
     }
-    return finishWith(loop, asm, true);
+    return finishWith(loop, asm, true, undefined, true);
   }
   const last = loop.attempt(present);
   return finishWith(loop, last.asm, false, 'The set of solids present did not settle within the allowed number of changes.');

@@ -3,14 +3,17 @@
 // audit.
 
 import { DEFAULTS, type SolveOptions } from './defaults';
-import type { Assemblage, TraceLine } from './newton';
-import { saturationIndex, settleOuterIonicStrength, settlePhases, type WarmStart } from './phases';
+import type { TraceLine } from './newton';
+import { type PhaseOutcome, saturationIndex, settleOuterIonicStrength, settlePhases, type WarmStart } from './phases';
 import { compileProblem, type Tableau } from './tableau';
 import type { Problem, SolveResult } from './types';
 
 // Copied out of DEFAULTS: read on every solve.
 const DAVIES_LIMIT_I = DEFAULTS.daviesLimitI;
 const NEAR_SATURATION = DEFAULTS.nearSaturation;
+// The fixed parts of the ionic-strength warning, built once (number-to-text costs on every solve).
+const DAVIES_WARNING_HEAD = 'Ionic strength ';
+const DAVIES_WARNING_TAIL = ` mol/L is above ${DAVIES_LIMIT_I} mol/L, beyond the usual range of the Davies equation; treat activities as estimates.`;
 
 /** A result together with the state to start the next, nearby solve from. */
 export interface TableauSolution {
@@ -22,73 +25,80 @@ function finiteOr(value: number, fallback: number): number {
   return Number.isFinite(value) ? value : fallback;
 }
 
-function buildResult(tab: Tableau, asm: Assemblage, possible: number[]): Omit<SolveResult, 'status' | 'iterations' | 'warnings'> {
+/** Largest |z| whose gamma is kept per solve (charges of real ions are well inside it). */
+const MAX_CACHED_CHARGE = 8;
+// gamma by |z| for the solve being built (NaN: not yet worked out); reused, results are synchronous.
+const gammaByCharge = new Float64Array(MAX_CACHED_CHARGE + 1);
+
+/** gamma = exp(phi z^2); one exponential per whole charge size, worked out on first use. */
+function gammaOf(phi: number, z: number): number {
+  const size = z < 0 ? -z : z;
+  if (size > MAX_CACHED_CHARGE || !Number.isInteger(size)) return finiteOr(Math.exp(phi * z * z), 1);
+  let g = gammaByCharge[size] as number;
+  if (Number.isNaN(g)) {
+    g = finiteOr(Math.exp(phi * size * size), 1);
+    gammaByCharge[size] = g;
+  }
+  return g;
+}
+
+/**
+ * The result a chemist reads, built in one pass over the assemblage. Records are filled in the
+ * order of the public result (components, then species), so their keys print in that order.
+ */
+function buildResult(tab: Tableau, settled: PhaseOutcome): SolveResult & { trace?: TraceLine[] } {
+  const { asm, possible } = settled;
+  const phi = asm.phiValue;
+  gammaByCharge.fill(NaN);
   const free: Record<string, number> = {};
   const species: Record<string, number> = {};
   const gamma: Record<string, number> = {};
-  // gamma depends only on z^2: one exponential per whole charge size up to 8.
-  const byZ2: number[] = [];
-  const gammaOf = (z: number): number => {
-    const z2 = z * z;
-    if (z2 > 64 || !Number.isInteger(z2)) return finiteOr(Math.exp(asm.phiValue * z2), 1);
-    let g = byZ2[z2];
-    if (g === undefined) {
-      g = finiteOr(Math.exp(asm.phiValue * z2), 1);
-      byZ2[z2] = g;
-    }
-    return g;
-  };
-  for (let j = 0; j < tab.nc; j++) {
-    const name = tab.components[j] as string;
-    const k = asm.componentRow[j] as number;
-    const value = finiteOr(k >= 0 ? (asm.x[k] as number) : tab.fixed[j] ? (tab.fixedValue[j] as number) : 0, 0);
+  const { nc, ns, nsol, components, fixed, fixedValue, componentCharge, speciesNames, speciesCharge, solidNames } = tab;
+  const { componentRow } = asm;
+  for (let j = 0; j < nc; j++) {
+    const name = components[j] as string;
+    const k = componentRow[j] as number;
+    const value = finiteOr(k >= 0 ? (asm.x[k] as number) : fixed[j] ? (fixedValue[j] as number) : 0, 0);
     free[name] = value;
     species[name] = value;
-    gamma[name] = gammaOf(tab.componentCharge[j] as number);
+    gamma[name] = gammaOf(phi, componentCharge[j] as number);
   }
-  for (let i = 0; i < tab.ns; i++) {
-    const name = tab.speciesNames[i] as string;
+  for (let i = 0; i < ns; i++) {
+    const name = speciesNames[i] as string;
     const r = asm.speciesRow[i] as number;
     species[name] = r >= 0 ? finiteOr(asm.c[r] as number, 0) : 0;
-    gamma[name] = gammaOf(tab.speciesCharge[i] as number);
+    gamma[name] = gammaOf(phi, speciesCharge[i] as number);
   }
   const solids: Record<string, number> = {};
   for (let r = 0; r < asm.p; r++) {
     const amount = asm.n[r] as number;
-    if (amount > 0 && Number.isFinite(amount)) solids[tab.solidNames[asm.present[r] as number] as string] = amount;
+    if (amount > 0 && Number.isFinite(amount)) solids[solidNames[asm.present[r] as number] as string] = amount;
   }
+  const ionicStrength = finiteOr(asm.ionicStrength, 0);
+  const warnings = tab.warnings.slice();
+  if (tab.activity === 'davies' && ionicStrength > DAVIES_LIMIT_I) warnings.push(DAVIES_WARNING_HEAD + ionicStrength.toPrecision(3) + DAVIES_WARNING_TAIL);
   const saturation: Record<string, number> = {};
-  for (let s = 0; s < tab.nsol; s++) {
-    const si = possible[s] ? saturationIndex(asm, s) : -Infinity;
-    saturation[tab.solidNames[s] as string] = Number.isNaN(si) ? -Infinity : si;
-  }
-  return {
-    free,
-    species,
-    solids,
-    saturation,
-    gamma,
-    ionicStrength: finiteOr(asm.ionicStrength, 0),
-    residual: finiteOr(asm.massResidual(), Number.MAX_VALUE),
-    activity: tab.activity,
-    temperatureC: tab.temperatureC,
-  };
-}
-
-function resultWarnings(tab: Tableau, body: ReturnType<typeof buildResult>): string[] {
-  const warnings = [...tab.warnings];
-  if (tab.activity === 'davies' && body.ionicStrength > DAVIES_LIMIT_I) {
-    warnings.push(
-      `Ionic strength ${body.ionicStrength.toPrecision(3)} mol/L is above ${DAVIES_LIMIT_I} mol/L, beyond the usual range of the Davies equation; treat activities as estimates.`,
-    );
-  }
-  for (const name of tab.solidNames) {
-    const si = body.saturation[name] as number;
-    if (body.solids[name] === undefined && si < 0 && si > -NEAR_SATURATION) {
+  for (let s = 0; s < nsol; s++) {
+    const name = solidNames[s] as string;
+    let si = possible[s] ? saturationIndex(asm, s) : -Infinity;
+    if (Number.isNaN(si)) si = -Infinity;
+    saturation[name] = si;
+    // Close to saturation but absent (a present solid has index 0, so the test also skips those
+    // with a positive amount; one present with amount 0 is absent from solids and is tested).
+    if (si < 0 && si > -NEAR_SATURATION && solids[name] === undefined) {
       warnings.push(`${name} is close to saturation (saturation index ${si.toFixed(2)}): a small change may precipitate it.`);
     }
   }
-  return warnings;
+  const status = settled.converged ? 'converged' : 'not_converged';
+  const residual = finiteOr(asm.massResidual(), Number.MAX_VALUE);
+  const iterations = settled.iterations;
+  const { activity, temperatureC } = tab;
+  // Two literals rather than a spread: the message key only when there is one, in its place.
+  const result: SolveResult & { trace?: TraceLine[] } = settled.message
+    ? { status, message: settled.message, free, species, solids, saturation, gamma, ionicStrength, residual, activity, temperatureC, iterations, warnings }
+    : { status, free, species, solids, saturation, gamma, ionicStrength, residual, activity, temperatureC, iterations, warnings };
+  if (settled.trace) result.trace = settled.trace;
+  return result;
 }
 
 /** Solves a compiled tableau, optionally from the state of a nearby solve. Never throws on non-convergence. */
@@ -103,16 +113,7 @@ export function solveTableau(tab: Tableau, options: SolveOptions = {}, warm?: Wa
     const outer = settleOuterIonicStrength(tab, opts, settled.state.ionicStrength);
     if (outer) settled = { ...outer, iterations: outer.iterations + settled.iterations, trace: settled.trace };
   }
-  const body = buildResult(tab, settled.asm, settled.possible);
-  const result: SolveResult & { trace?: TraceLine[] } = {
-    status: settled.converged ? 'converged' : 'not_converged',
-    ...(settled.message ? { message: settled.message } : {}),
-    ...body,
-    iterations: settled.iterations,
-    warnings: resultWarnings(tab, body),
-  };
-  if (settled.trace) result.trace = settled.trace;
-  return { result, state: settled.state };
+  return { result: buildResult(tab, settled), state: settled.state };
 }
 
 /** Solves one problem in the general form; throws EngineInputError for invalid input only. */

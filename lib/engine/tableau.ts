@@ -108,11 +108,20 @@ function readAmounts(problem: Obj, key: 'totals' | 'fixed', components: readonly
   }
 }
 
-interface Reaction {
-  name: string;
-  logK: number;
-  row: number[];
-  charge: number;
+/**
+ * Where the reactions of one list are compiled to: a row of counts per entry in `rows` (row-major,
+ * nc per entry), its name, its log K as ln K, and (species) its charge. Entries are written in
+ * place as they are read, with no per-entry objects.
+ */
+interface ReactionTable {
+  rows: number[];
+  names: string[];
+  lnK: number[];
+  charge: number[] | null;
+}
+
+function reactionTable(count: number, nc: number, withCharge: boolean): ReactionTable {
+  return { rows: zeros(count * nc), names: new Array<string>(count), lnK: zeros(count), charge: withCharge ? zeros(count) : null };
 }
 
 interface ReadContext {
@@ -132,9 +141,10 @@ function finiteAt(value: unknown, list: 'species' | 'solids', i: number, field: 
   return typeof value === 'number' && Number.isFinite(value) ? value : finite(value, `${entryPath(list, i)}.${field}`, what);
 }
 
-function readStoich(raw: unknown, list: 'species' | 'solids', i: number, ctx: ReadContext): number[] {
+/** Reads entry i's stoich into row i of `rows` (zeros where a component is not named). */
+function readStoich(raw: unknown, list: 'species' | 'solids', i: number, ctx: ReadContext, rows: number[]): void {
   if (!isObject(raw)) throw new EngineInputError(`${entryPath(list, i)}.stoich`, 'must be an object of component name to count');
-  const row = zeros(ctx.nc);
+  const at = i * ctx.nc;
   let any = false;
   for (const name in raw) {
     const j = ctx.components.indexOf(name);
@@ -142,20 +152,21 @@ function readStoich(raw: unknown, list: 'species' | 'solids', i: number, ctx: Re
       throw new EngineInputError(`${entryPath(list, i)}.stoich.${name}`, `unknown component "${name}"; add it to components or fix the name`);
     }
     const value = raw[name];
-    row[j] = typeof value === 'number' && Number.isFinite(value) ? value : finite(value, `${entryPath(list, i)}.stoich.${name}`, 'a stoichiometric coefficient');
-    if (row[j] !== 0) any = true;
+    const v = typeof value === 'number' && Number.isFinite(value) ? value : finite(value, `${entryPath(list, i)}.stoich.${name}`, 'a stoichiometric coefficient');
+    rows[at + j] = v;
+    if (v !== 0) any = true;
   }
   if (!any) throw new EngineInputError(`${entryPath(list, i)}.stoich`, 'needs at least one component with a non-zero coefficient');
-  return row;
 }
 
-function readReaction(raw: unknown, list: 'species' | 'solids', i: number, ctx: ReadContext): Reaction {
+/** Reads entry i of a list into entry i of the table; returns its name. */
+function readReaction(raw: unknown, list: 'species' | 'solids', i: number, ctx: ReadContext, into: ReactionTable): string {
   const key = list === 'solids' ? 'logKsp' : 'logK';
   if (!isObject(raw)) throw new EngineInputError(entryPath(list, i), `must be an object with name, ${key} and stoich`);
   const { name } = raw;
   if (typeof name !== 'string' || name.trim() === '') throw new EngineInputError(`${entryPath(list, i)}.name`, 'must be a non-empty string');
   let logK = finiteAt(raw[key], list, i, key, list === 'solids' ? 'log Ksp' : 'log K');
-  const row = readStoich(raw.stoich, list, i, ctx);
+  readStoich(raw.stoich, list, i, ctx, into.rows);
   const refC = raw.temperatureC === undefined ? REFERENCE_TEMPERATURE_C : finiteAt(raw.temperatureC, list, i, 'temperatureC', 'a temperature');
   if (raw.deltaH !== undefined) {
     const dh = finiteAt(raw.deltaH, list, i, 'deltaH', 'an enthalpy in kJ/mol');
@@ -163,9 +174,10 @@ function readReaction(raw: unknown, list: 'species' | 'solids', i: number, ctx: 
   } else if (Math.abs(refC - ctx.temperatureC) > 0.5) {
     ctx.stale.push(name);
   }
-  let charge = chargeFromName(name);
-  if (list === 'species' && raw.charge !== undefined) charge = finiteAt(raw.charge, list, i, 'charge', 'a charge');
-  return { name, logK, row, charge };
+  if (into.charge) into.charge[i] = raw.charge !== undefined ? finiteAt(raw.charge, list, i, 'charge', 'a charge') : chargeFromName(name);
+  into.names[i] = name;
+  into.lnK[i] = logK * Math.LN10;
+  return name;
 }
 
 function readList(problem: Obj, key: 'species' | 'solids'): unknown[] {
@@ -198,14 +210,15 @@ function readIonicStrength(input: Obj): number | null {
 }
 
 /** True when name occurs in names[0..upto). Lists are short; a scan beats building a set. */
-function occursBefore(names: readonly Reaction[], name: string, upto: number): boolean {
-  for (let k = 0; k < upto; k++) if ((names[k] as Reaction).name === name) return true;
+function occursBefore(names: readonly string[], name: string, upto: number): boolean {
+  for (let k = 0; k < upto; k++) if (names[k] === name) return true;
   return false;
 }
 
-/** Whether a row has a non-zero coefficient on a component that is not fixed. */
-function hasFreeComponent(row: readonly number[], fixed: readonly number[]): boolean {
-  for (let j = 0; j < row.length; j++) if (row[j] !== 0 && !fixed[j]) return true;
+/** Whether row s of a row-major table has a non-zero coefficient on a component that is not fixed. */
+function hasFreeComponent(rows: readonly number[], s: number, fixed: readonly number[]): boolean {
+  const nc = fixed.length;
+  for (let j = 0; j < nc; j++) if (rows[s * nc + j] !== 0 && !fixed[j]) return true;
   return false;
 }
 
@@ -232,23 +245,23 @@ export function compileProblem(input: Problem | unknown): Tableau {
   const ctx: ReadContext = { components, nc, temperatureC, stale: [] };
 
   const rawSpecies = readList(input, 'species');
-  const species: Reaction[] = [];
-  for (let i = 0; i < rawSpecies.length; i++) {
-    const r = readReaction(rawSpecies[i], 'species', i, ctx);
-    if (components.indexOf(r.name) >= 0 || occursBefore(species, r.name, i)) {
-      throw new EngineInputError(`species[${i}].name`, `duplicate name "${r.name}" (components and species share one list of names)`);
+  const ns = rawSpecies.length;
+  const species = reactionTable(ns, nc, true);
+  for (let i = 0; i < ns; i++) {
+    const name = readReaction(rawSpecies[i], 'species', i, ctx, species);
+    if (components.indexOf(name) >= 0 || occursBefore(species.names, name, i)) {
+      throw new EngineInputError(`species[${i}].name`, `duplicate name "${name}" (components and species share one list of names)`);
     }
-    species.push(r);
   }
   const rawSolids = readList(input, 'solids');
-  const solids: Reaction[] = [];
-  for (let i = 0; i < rawSolids.length; i++) {
-    const r = readReaction(rawSolids[i], 'solids', i, ctx);
-    if (occursBefore(solids, r.name, i)) throw new EngineInputError(`solids[${i}].name`, `duplicate solid "${r.name}"`);
-    if (!hasFreeComponent(r.row, fixed)) {
-      throw new EngineInputError(`solids[${i}].stoich`, `"${r.name}" is made only of fixed components; at least one of its components needs a total`);
+  const nsol = rawSolids.length;
+  const solids = reactionTable(nsol, nc, false);
+  for (let i = 0; i < nsol; i++) {
+    const name = readReaction(rawSolids[i], 'solids', i, ctx, solids);
+    if (occursBefore(solids.names, name, i)) throw new EngineInputError(`solids[${i}].name`, `duplicate solid "${name}"`);
+    if (!hasFreeComponent(solids.rows, i, fixed)) {
+      throw new EngineInputError(`solids[${i}].stoich`, `"${name}" is made only of fixed components; at least one of its components needs a total`);
     }
-    solids.push(r);
   }
   const fixedIonicStrength = readIonicStrength(input);
 
@@ -260,28 +273,6 @@ export function compileProblem(input: Problem | unknown): Tableau {
     warnings.push(`Davies A is scaled from 0.509 at 25 C to ${temperatureC} C through the permittivity of water.`);
   }
 
-  const ns = species.length;
-  const nsol = solids.length;
-  const a = new Array<number>(ns * nc);
-  const lnK = new Array<number>(ns);
-  const speciesCharge = new Array<number>(ns);
-  const speciesNamesList = new Array<string>(ns);
-  for (let i = 0; i < ns; i++) {
-    const sp = species[i] as Reaction;
-    for (let j = 0; j < nc; j++) a[i * nc + j] = sp.row[j] as number;
-    lnK[i] = sp.logK * Math.LN10;
-    speciesCharge[i] = sp.charge;
-    speciesNamesList[i] = sp.name;
-  }
-  const b = new Array<number>(nsol * nc);
-  const lnKsp = new Array<number>(nsol);
-  const solidNamesList = new Array<string>(nsol);
-  for (let s = 0; s < nsol; s++) {
-    const so = solids[s] as Reaction;
-    for (let j = 0; j < nc; j++) b[s * nc + j] = so.row[j] as number;
-    lnKsp[s] = so.logK * Math.LN10;
-    solidNamesList[s] = so.name;
-  }
   const componentCharge = new Array<number>(nc);
   for (let j = 0; j < nc; j++) componentCharge[j] = chargeFromName(components[j] as string);
 
@@ -294,14 +285,14 @@ export function compileProblem(input: Problem | unknown): Tableau {
     fixedValue,
     fixedLn,
     ns,
-    speciesNames: speciesNamesList,
-    speciesCharge,
-    lnK,
-    a,
+    speciesNames: species.names,
+    speciesCharge: species.charge as number[],
+    lnK: species.lnK,
+    a: species.rows,
     nsol,
-    solidNames: solidNamesList,
-    lnKsp,
-    b,
+    solidNames: solids.names,
+    lnKsp: solids.lnK,
+    b: solids.rows,
     activity,
     temperatureC,
     daviesA: daviesA(DEFAULTS.daviesA, temperatureC),
