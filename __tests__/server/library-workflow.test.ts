@@ -199,6 +199,31 @@ describe('revisions, versions and runs', () => {
     await expect(t.db.db.execute(sql`truncate constants cascade`)).rejects.toThrow();
   });
 
+  it('counts library_revision up in the same transaction as each library change, and the counter only goes up', async () => {
+    const revision = async () => Number(((await t.db.db.execute(sql`select revision from library_revision where id = 1`)) as unknown as { revision: string }[])[0]?.revision);
+    const before = await revision();
+    const row = await approvedDefining('AgCl(s)');
+    const draft = await otherChemist.post(`/api/constants/${row.id}/revisions`).send({ logValue: -9.8, source: SOURCE, note: 'Revision counter test.' });
+    expect(draft.status).toBe(201);
+    const afterDraft = await revision();
+    expect(afterDraft).toBeGreaterThan(before);
+    // A change rolled back leaves the number where it was.
+    await expect(
+      t.db.db.transaction(async (tx) => {
+        await tx.update(constants).set({ status: 'rejected' }).where(eq(constants.id, draft.body.id));
+        throw new Error('roll back');
+      }),
+    ).rejects.toThrow('roll back');
+    expect(await revision()).toBe(afterDraft);
+    expect((await reviewer.post(`/api/constants/${draft.body.id}/review`).send({ decision: 'reject', note: 'Counter test only.' })).status).toBe(200);
+    expect(await revision()).toBeGreaterThan(afterDraft);
+    // Drizzle wraps the database's error; the trigger's message is its cause.
+    const refusal = (query: Promise<unknown>) => query.then(() => 'accepted', (e: { cause?: { message?: string } }) => e.cause?.message ?? String(e));
+    expect(await refusal(t.db.db.execute(sql`update library_revision set revision = revision - 1`))).toBe('library_revision only counts up');
+    expect(await refusal(t.db.db.execute(sql`delete from library_revision`))).toBe('library_revision only counts up');
+    expect(await refusal(t.db.db.execute(sql`truncate library_revision`))).toBe('library_revision only counts up');
+  });
+
   it('retiring needs a reviewer and an approved version', async () => {
     const row = await approvedDefining('NiI+');
     expect((await chemist.post(`/api/constants/${row.id}/retire`).send({ note: 'no' })).status).toBe(403);

@@ -1,6 +1,7 @@
 import { sql } from 'drizzle-orm';
 import {
   type AnyPgColumn,
+  bigint,
   boolean,
   check,
   doublePrecision,
@@ -104,6 +105,18 @@ export const constantTerms = pgTable(
     position: integer('position').notNull(),
   },
   (t) => [primaryKey({ columns: [t.constantId, t.speciesId] }), check('constant_terms_nonzero', sql`${t.coefficient} <> 0`)],
+);
+
+// One row whose revision goes up, in the same transaction, with every statement that changes
+// species, constants or constant_terms (statement triggers, migration 0012). The server keeps the
+// builder's view of the library in memory and checks it against this number on each calculation.
+export const libraryRevision = pgTable(
+  'library_revision',
+  {
+    id: integer('id').primaryKey(),
+    revision: bigint('revision', { mode: 'number' }).notNull(),
+  },
+  (t) => [check('library_revision_one_row', sql`${t.id} = 1`)],
 );
 
 export const runs = pgTable(

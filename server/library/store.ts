@@ -10,6 +10,7 @@ import { constants, constantTerms, type ConstantRow, species, type SpeciesRow, u
 import type { CatalogueEntry, LibraryConstant } from '@/lib/library/build';
 import { type CheckedReaction, fromSignedTerms, isSolidFormula, ReactionError } from '@/lib/library/reaction';
 import { analyseFormula, molarMass } from '@/lib/units';
+import { readRevisions, type Revisions } from '@/server/revisions';
 import {
   BASIS_ROLES,
   type ConstantKind,
@@ -192,25 +193,24 @@ export function libraryConstants(snap: LibrarySnapshot): LibraryConstant[] {
 export type BuildInputs = { catalogue: CatalogueEntry[]; constants: LibraryConstant[] };
 
 // The builder's view of the library, kept between requests: every calculation needs it, and
-// reading and mapping the whole library took most of a calculation's time. Rows never change
-// except a status moving forward (triggers, migration 0005), so the counts and id sums per
-// status, with the species and term counts, change whenever anything the builder reads does.
-// The key also names the database, so two databases in one process never share an entry.
+// reading and mapping the whole library took most of a calculation's time. library_revision counts
+// up inside every transaction that changes species, constants or terms (migration 0012), so the
+// view is reused while the revision stands. The key also names the database, so two databases in
+// one process never share an entry.
 const buildCache = new Map<string, BuildInputs>();
 const BUILD_CACHE_LIMIT = 8;
 
 /** The catalogue and versions for the builder, from memory when the library has not changed since. */
-export async function libraryForBuild(tx: Tx): Promise<BuildInputs> {
-  const result = await tx.execute(sql`select concat_ws('|', current_database(), inet_server_port(),
-      (select count(*) from species), (select count(*) from constant_terms),
-      (select string_agg(status || ':' || n || ':' || ids, ',' order by status) from
-        (select status, count(*) as n, sum(id) as ids from constants group by status) per_status)) as key`);
-  const rows = (Array.isArray(result) ? result : (result as { rows: unknown[] }).rows) as { key: string }[];
-  const key = rows[0]?.key ?? '';
-  const held = buildCache.get(key);
+export async function libraryForBuild(tx: Tx, known?: Revisions): Promise<BuildInputs> {
+  const revisions = known ?? (await readRevisions(tx));
+  // The revision is read before the rows: rows changed in between are kept under the old number,
+  // which no later request asks for.
+  const key = revisions.library === null ? null : `${revisions.database}|${revisions.library}`;
+  const held = key === null ? undefined : buildCache.get(key);
   if (held) return held;
   const snap = await readLibrary(tx);
   const inputs = { catalogue: catalogueOf(snap), constants: libraryConstants(snap) };
+  if (key === null) return inputs;
   if (buildCache.size >= BUILD_CACHE_LIMIT) buildCache.delete(buildCache.keys().next().value as string);
   buildCache.set(key, inputs);
   return inputs;

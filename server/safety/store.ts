@@ -24,6 +24,7 @@ import { writeAudit } from '@/server/audit';
 import { bathOf, toAnalysis } from '@/server/baths/store';
 import { HttpError } from '@/server/http-error';
 import type { Tx } from '@/server/library/store';
+import { readRevisions, type Revisions } from '@/server/revisions';
 import type { Bath } from '@/shared/baths';
 import type { CalculatorKey } from '@/shared/calculators';
 import type { ProblemJson } from '@/shared/constants';
@@ -48,19 +49,18 @@ export type ThresholdsInForce = { version: number; values: HazardThresholds };
 const thresholdsCache = new Map<string, ThresholdsInForce>();
 
 /** The newest thresholds version (version 1, the defaults, always exists: migration 0010). */
-export async function currentThresholds(tx: Tx): Promise<ThresholdsInForce> {
-  // Every calculation asks: one plain query, the values parsed only when the version is new.
-  const result = await tx.execute(
-    sql`select current_database() || '|' || inet_server_port() || '|' || version as key, version, values from hazard_thresholds order by version desc limit 1`,
-  );
-  const rows = (Array.isArray(result) ? result : (result as { rows: unknown[] }).rows) as { key: string; version: number; values: unknown }[];
-  const row = rows[0];
+export async function currentThresholds(tx: Tx, known?: Revisions): Promise<ThresholdsInForce> {
+  // Every calculation asks: one small query (or none, when the caller read the revisions), the
+  // values parsed only when the version is new.
+  const revisions = known ?? (await readRevisions(tx));
+  const row = revisions.thresholds;
   if (!row) throw new Error('no hazard thresholds stored (migration 0010 inserts version 1)');
-  const held = thresholdsCache.get(row.key);
+  const key = `${revisions.database}|${row.version}`;
+  const held = thresholdsCache.get(key);
   if (held) return held;
-  const parsed = { version: Number(row.version), values: hazardThresholdsSchema.parse(typeof row.values === 'string' ? JSON.parse(row.values) : row.values) };
+  const parsed = { version: row.version, values: hazardThresholdsSchema.parse(row.values) };
   if (thresholdsCache.size >= 64) thresholdsCache.clear();
-  thresholdsCache.set(row.key, parsed);
+  thresholdsCache.set(key, parsed);
   return parsed;
 }
 
