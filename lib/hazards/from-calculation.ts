@@ -19,6 +19,11 @@ export interface CalculationHazardInput {
   params: unknown;
   problem: ProblemJson;
   outcome?: { result?: unknown } | null;
+  /**
+   * The base solution (the built problem at the system's pH), when the caller has solved it
+   * already: a speciation's own result, or a saved run's. Omitted: solved here.
+   */
+  base?: SolvedSolution | null;
 }
 
 type Json = Record<string, unknown>;
@@ -40,6 +45,12 @@ function baseSolution(problem: ProblemJson, pH: number | undefined): SolvedSolut
   } catch {
     return null;
   }
+}
+
+/** The base solution in a solve result as JSON ({status, free, species}); null unless it converged. */
+export function solutionOf(result: unknown): SolvedSolution | null {
+  if (!isRecord(result) || result.status !== 'converged') return null;
+  return { free: numbers(result.free), species: numbers(result.species) };
 }
 
 const rawSteps = (params: unknown): Json[] => (isRecord(params) && Array.isArray(params.steps) ? params.steps.map((s) => (isRecord(s) ? s : {})) : []);
@@ -143,7 +154,7 @@ export function calculationSituation(input: CalculationHazardInput): HazardSitua
   return {
     totals: numbers(input.system?.totals),
     pH,
-    solution: baseSolution(input.problem, pH ?? undefined),
+    solution: input.base !== undefined ? input.base : baseSolution(input.problem, pH ?? undefined),
     reagents: reagentsOf(input.calculator, input.params),
     ...(input.calculator === 'dosing_plan' ? { steps: dosingSteps(input) } : {}),
   };

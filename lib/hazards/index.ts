@@ -21,6 +21,6 @@ export {
   type ReagentKind,
 } from './ghs';
 export { HCN_PKA, evaluateHazards, hcnRatioFromPh, isFlagged } from './rules';
-export { calculationHazards, calculationSituation, type CalculationHazardInput } from './from-calculation';
+export { calculationHazards, calculationSituation, solutionOf, type CalculationHazardInput } from './from-calculation';
 export { bathHazards, bathSituation } from './from-bath';
 export type * from './types';

@@ -20,9 +20,10 @@ import { writeAudit } from '@/server/audit';
 import { HttpError } from '@/server/http-error';
 import { libraryForBuild, type Tx } from '@/server/library/store';
 import { output } from '@/server/output';
+import { readRevisions, type Revisions } from '@/server/revisions';
 import { mailWaiting } from '@/server/safety/notify';
 import { currentThresholds, openReview, releasedRuns, reviewsOfRuns, runHazards, runSafety } from '@/server/safety/store';
-import { calculationHazards, isFlagged } from '@/lib/hazards';
+import { calculationHazards, isFlagged, solutionOf } from '@/lib/hazards';
 import { briefHazards, type HazardThresholds, type ReviewStatus } from '@/shared/safety';
 import { calculationOutcomeSchema, calculationRequestSchema, type CalculatorKey, PARAMS_SCHEMAS } from '@/shared/calculations';
 import {
@@ -47,8 +48,8 @@ function unprocessable(field: string, message: string): HttpError {
 }
 
 /** Builds from the library as it is now in `tx`; a selection it cannot build is a 422 naming the field. */
-export async function buildFromLibrary(tx: Tx, request: z.output<typeof systemRequestSchema>): Promise<BuildOutput> {
-  const library = await libraryForBuild(tx);
+export async function buildFromLibrary(tx: Tx, request: z.output<typeof systemRequestSchema>, known?: Revisions): Promise<BuildOutput> {
+  const library = await libraryForBuild(tx, known);
   try {
     return buildSystem(library.catalogue, library.constants, request);
   } catch (e) {
@@ -172,11 +173,15 @@ function solveProblem(problem: unknown, prefix: string): unknown {
 export async function saveRun(tx: Tx, user: { id: string; name: string }, input: z.output<typeof runInputSchema>): Promise<Run> {
   const bathName = await bathNameOf(tx, input.bathId ?? null);
   if (input.bathId && bathName === null) throw unprocessable('bathId', 'there is no such bath');
-  const built = await buildFromLibrary(tx, input.system);
+  const revisions = await readRevisions(tx);
+  const built = await buildFromLibrary(tx, input.system, revisions);
   const result = solveOrExplain(built, input.system.pH);
   const outcome = calculate(input.calculator, input.params, built, input.system.pH);
-  const thresholds = await currentThresholds(tx);
-  const hazards = calculationHazards({ calculator: input.calculator, system: input.system, params: input.params, problem: built.problem, outcome: { result: outcome.result } }, thresholds.values);
+  const thresholds = await currentThresholds(tx, revisions);
+  const hazards = calculationHazards(
+    { calculator: input.calculator, system: input.system, params: input.params, problem: built.problem, outcome: { result: outcome.result }, base: solutionOf(result) },
+    thresholds.values,
+  );
   const id = randomUUID();
   const [row] = await tx
     .insert(runs)
@@ -247,10 +252,14 @@ export function runsRouter(ctx: AuthContext): Router {
 
   router.post('/calculations', signedIn, async (req: Request, res: Response) => {
     const request = calculationRequestSchema.parse(req.body);
-    const built = await buildFromLibrary(db, request.system);
+    // One query for both the library's revision and the thresholds in force.
+    const revisions = await readRevisions(db);
+    const built = await buildFromLibrary(db, request.system, revisions);
     const run = calculate(request.calculator, request.params, built, request.system.pH);
-    const thresholds = await currentThresholds(db);
-    const hazards = calculationHazards({ calculator: request.calculator, system: request.system, params: request.params, problem: built.problem, outcome: { result: run.result } }, thresholds.values);
+    const thresholds = await currentThresholds(db, revisions);
+    // A speciation's result is the base solution the rules look at: no second solve for it.
+    const base = request.calculator === 'speciation' ? solutionOf((run.result as { result?: unknown } | null)?.result) : undefined;
+    const hazards = calculationHazards({ calculator: request.calculator, system: request.system, params: request.params, problem: built.problem, outcome: { result: run.result }, base }, thresholds.values);
     res.json(output(calculationOutcomeSchema, { ...run, hazards }));
   });
 

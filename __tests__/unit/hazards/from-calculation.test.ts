@@ -2,7 +2,7 @@
 // speciation for the HCN share), the reagents the calculator names, and a dosing plan's steps from
 // its result or, without one, from its parameters.
 import { runCalculation } from '@/lib/calculators/run-calculation';
-import { calculationHazards, calculationSituation, hcnRatioFromPh, type CalculationHazardInput } from '@/lib/hazards';
+import { calculationHazards, calculationSituation, hcnRatioFromPh, solutionOf, type CalculationHazardInput } from '@/lib/hazards';
 import { solveBuilt } from '@/lib/library/solve-built';
 import type { dosingPlanParamsSchema } from '@/shared/calculations';
 import { systemRequestSchema, type ProblemJson } from '@/shared/constants';
@@ -35,6 +35,20 @@ const value = (h: Hazard | undefined, label: string) => h?.evidence.find((e) => 
 const RATIO = 'HCN share of free cyanide, HCN / (HCN + CN-)';
 
 describe('calculationHazards: engine speciation', () => {
+  it('uses a base solution the caller passes instead of solving again: a speciation result gives the same hazards', () => {
+    const run = runCalculation('speciation', problem, 10, {});
+    const base = solutionOf((run.result as { result: unknown }).result);
+    expect(base).not.toBeNull();
+    expect(calculationHazards(input({ outcome: { result: run.result }, base }), T)).toEqual(calculationHazards(input({}), T));
+    // Passed, it is used as given: a problem that cannot be solved still gets the engine's share.
+    const broken = { ...problem, species: [{ name: 'HCN', logK: 9.21, stoich: { 'H+': 1, 'XX-': 1 } }] };
+    expect(calculationSituation(input({ problem: broken, base })).solution).toEqual(base);
+    // null says there is no solution (it did not converge): the pKa fallback, as when solving fails.
+    expect(calculationSituation(input({ base: null })).solution).toBeNull();
+    expect(solutionOf({ status: 'not_converged', free: {}, species: {} })).toBeNull();
+    expect(solutionOf({ status: 'converged', free: { 'CN-': 0.2, 'Ag+': null }, species: 'x' })).toEqual({ free: { 'CN-': 0.2 }, species: {} });
+  });
+
   it('takes the HCN share from the solved problem, not from the pKa, at pH 10', () => {
     const r = solveBuilt(problem, 10);
     expect(r.status).toBe('converged');
