@@ -93,7 +93,7 @@ const ROLE_OF_LIST: Record<'metals' | 'ligands' | 'counterIons', SpeciesRole> = 
 };
 
 /** The component list: chosen ions in order, then H+ when a pH is set. Checks each against the catalogue. */
-function chooseComponents(sel: BuildSelection, roles: Map<string, SpeciesRole>): string[] {
+function chooseComponents(sel: SelectionChoice, roles: Map<string, SpeciesRole>): string[] {
   const components: string[] = [];
   for (const list of ['metals', 'ligands', 'counterIons'] as const) {
     sel[list].forEach((formula, i) => {
@@ -173,14 +173,35 @@ function toUse(c: LibraryConstant): ConstantUse {
   };
 }
 
-/** Builds the engine problem for a selection from the library; throws BuildError naming the field to fix. */
-export function buildSystem(catalogue: readonly CatalogueEntry[], library: readonly LibraryConstant[], sel: BuildSelection): BuildOutput {
+/** The parts of a selection a build depends on besides the library: everything but the totals and the pH value. */
+export type SelectionChoice = Omit<BuildSelection, 'totals' | 'pH'> & { pH?: unknown };
+
+/**
+ * What a build takes from the library and the choice of ions, solids, activity, temperature and
+ * drafts (whether a pH is given counts; its value and the totals do not). Callers may keep it for
+ * the same library and choice (selectionKey) and finish it for any totals with completeBuild.
+ */
+export interface SelectionBuild {
+  components: string[];
+  species: ProblemJson['species'];
+  /** The solids asked for that can form (all that can, when none were asked for). */
+  solids: ProblemJson['solids'];
+  availableSolids: string[];
+  constants: ConstantUse[];
+  drafts: ConstantUse[];
+  /** Warnings about the constants used (temperature, medium, drafts), in that order. */
+  notes: string[];
+}
+
+/** A text that is equal for two selections exactly when buildSelection gives the same for them. */
+export function selectionKey(sel: SelectionChoice): string {
+  return JSON.stringify([sel.metals, sel.ligands, sel.counterIons, sel.solids ?? null, sel.pH !== undefined, sel.activity, sel.temperatureC, sel.includeDrafts]);
+}
+
+/** The library-dependent part of a build; throws BuildError for an ion the catalogue does not allow. */
+export function buildSelection(catalogue: readonly CatalogueEntry[], library: readonly LibraryConstant[], sel: SelectionChoice): SelectionBuild {
   const roles = new Map(catalogue.map((s) => [s.formula, s.role]));
   const components = chooseComponents(sel, roles);
-  for (const key of Object.keys(sel.totals)) {
-    if (key === PROTON && sel.pH !== undefined) throw new BuildError(`totals.${key}`, 'give either a pH or a total for H+, not both');
-    if (!components.includes(key)) throw new BuildError(`totals.${key}`, `"${key}" is not one of the chosen ions; choose it or remove its total`);
-  }
 
   const known = new Map<string, Derived>();
   for (const comp of components) known.set(comp, { logK: 0, stoich: new Map([[comp, 1]]), uses: new Set(), deltaH: 0 });
@@ -210,14 +231,6 @@ export function buildSystem(catalogue: readonly CatalogueEntry[], library: reado
 
   const derivedNames = [...known.keys()].filter((n) => !components.includes(n) && n !== WATER);
   const availableSolids = derivedNames.filter(isSolidFormula).sort();
-  if (sel.solids) {
-    sel.solids.forEach((s, i) => {
-      if (!availableSolids.includes(s)) {
-        const list = availableSolids.length ? availableSolids.join(', ') : 'none';
-        throw new BuildError(`solids.${i}`, `"${s}" cannot form from the chosen ions (those that can: ${list})`);
-      }
-    });
-  }
   const solidNames = sel.solids ? availableSolids.filter((s) => sel.solids?.includes(s)) : availableSolids;
   const speciesNames = derivedNames.filter((n) => !isSolidFormula(n));
 
@@ -235,30 +248,54 @@ export function buildSystem(catalogue: readonly CatalogueEntry[], library: reado
     return { name, logKsp: round(-d.logK), stoich: asStoich(d), temperatureC: sel.temperatureC };
   });
 
-  const totals: Record<string, number> = {};
-  for (const comp of components) if (comp !== PROTON) totals[comp] = sel.totals[comp] ?? 0;
-  const fixed: Record<string, number> = sel.pH !== undefined ? { [PROTON]: 10 ** -sel.pH } : {};
-
   const used = chosen.filter((c) => usedIds.has(c.id));
-  const warnings: string[] = [];
-  if (sel.pH === undefined) warnings.push('No pH given: protonated ligands, hydroxo complexes and hydroxide solids are left out.');
+  const notes: string[] = [];
   const usedReactions = new Set(used.map((c) => c.reaction));
   const notCorrected = [...unchanged].filter((r) => usedReactions.has(r));
   if (notCorrected.length > 0) {
-    warnings.push(`No enthalpy is known for ${notCorrected.join('; ')}: the value at its own temperature is used at ${sel.temperatureC} °C.`);
+    notes.push(`No enthalpy is known for ${notCorrected.join('; ')}: the value at its own temperature is used at ${sel.temperatureC} °C.`);
   }
   const media = [...otherMedium].filter((r) => usedReactions.has(r));
   if (media.length > 0) {
-    warnings.push(`Measured in a background medium rather than extrapolated to I = 0, yet corrected with Davies as if thermodynamic: ${media.join('; ')}.`);
+    notes.push(`Measured in a background medium rather than extrapolated to I = 0, yet corrected with Davies as if thermodynamic: ${media.join('; ')}.`);
   }
   const drafts = used.filter((c) => c.status === 'draft');
-  if (drafts.length > 0) warnings.push(`Uses ${drafts.length} draft value${drafts.length === 1 ? '' : 's'} not yet reviewed: ${drafts.map((c) => c.reaction).join('; ')}.`);
+  if (drafts.length > 0) notes.push(`Uses ${drafts.length} draft value${drafts.length === 1 ? '' : 's'} not yet reviewed: ${drafts.map((c) => c.reaction).join('; ')}.`);
 
+  return { components, species, solids, availableSolids, constants: used.map(toUse), drafts: drafts.map(toUse), notes };
+}
+
+/**
+ * Finishes a build for the selection's totals and pH; throws BuildError naming the field (a total
+ * for an ion not chosen, a solid that cannot form). Reads `part` only, so a kept part can be shared.
+ */
+export function completeBuild(part: SelectionBuild, sel: BuildSelection): BuildOutput {
+  const { components, availableSolids } = part;
+  for (const key of Object.keys(sel.totals)) {
+    if (key === PROTON && sel.pH !== undefined) throw new BuildError(`totals.${key}`, 'give either a pH or a total for H+, not both');
+    if (!components.includes(key)) throw new BuildError(`totals.${key}`, `"${key}" is not one of the chosen ions; choose it or remove its total`);
+  }
+  sel.solids?.forEach((s, i) => {
+    if (!availableSolids.includes(s)) {
+      const list = availableSolids.length ? availableSolids.join(', ') : 'none';
+      throw new BuildError(`solids.${i}`, `"${s}" cannot form from the chosen ions (those that can: ${list})`);
+    }
+  });
+
+  const totals: Record<string, number> = {};
+  for (const comp of components) if (comp !== PROTON) totals[comp] = sel.totals[comp] ?? 0;
+  const fixed: Record<string, number> = sel.pH !== undefined ? { [PROTON]: 10 ** -sel.pH } : {};
+  const warnings = sel.pH === undefined ? ['No pH given: protonated ligands, hydroxo complexes and hydroxide solids are left out.', ...part.notes] : [...part.notes];
   return {
-    problem: { components, totals, fixed, species, solids, activity: sel.activity, temperatureC: sel.temperatureC },
-    constants: used.map(toUse),
-    drafts: drafts.map(toUse),
+    problem: { components, totals, fixed, species: part.species, solids: part.solids, activity: sel.activity, temperatureC: sel.temperatureC },
+    constants: part.constants,
+    drafts: part.drafts,
     availableSolids,
     warnings,
   };
+}
+
+/** Builds the engine problem for a selection from the library; throws BuildError naming the field to fix. */
+export function buildSystem(catalogue: readonly CatalogueEntry[], library: readonly LibraryConstant[], sel: BuildSelection): BuildOutput {
+  return completeBuild(buildSelection(catalogue, library, sel), sel);
 }

@@ -12,13 +12,13 @@ import { baths, constants, runConstants, runs, type RunRow, users } from '@/db/s
 import { CalculatorInputError } from '@/lib/calculators/errors';
 import { type CalculationRun, jsonSafe, runCalculation } from '@/lib/calculators/run-calculation';
 import { ENGINE_VERSION, EngineInputError, type Problem, solve } from '@/lib/engine';
-import { BuildError, buildSystem, type BuildOutput } from '@/lib/library/build';
+import { BuildError, type BuildOutput, completeBuild } from '@/lib/library/build';
 import { solveBuilt } from '@/lib/library/solve-built';
 import { allow, requireUser, signedIn } from '@/server/auth/access';
 import type { AuthContext } from '@/server/auth/context';
 import { writeAudit } from '@/server/audit';
 import { HttpError } from '@/server/http-error';
-import { libraryForBuild, type Tx } from '@/server/library/store';
+import { libraryForBuild, selectionFor, type Tx } from '@/server/library/store';
 import { output } from '@/server/output';
 import { readRevisions, type Revisions } from '@/server/revisions';
 import { mailWaiting } from '@/server/safety/notify';
@@ -51,7 +51,7 @@ function unprocessable(field: string, message: string): HttpError {
 export async function buildFromLibrary(tx: Tx, request: z.output<typeof systemRequestSchema>, known?: Revisions): Promise<BuildOutput> {
   const library = await libraryForBuild(tx, known);
   try {
-    return buildSystem(library.catalogue, library.constants, request);
+    return completeBuild(selectionFor(library, request), request);
   } catch (e) {
     if (e instanceof BuildError) throw unprocessable(e.field, e.message);
     throw e;

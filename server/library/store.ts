@@ -7,7 +7,7 @@ import { eq, inArray, sql } from 'drizzle-orm';
 
 import type { Db } from '@/db/client';
 import { constants, constantTerms, type ConstantRow, species, type SpeciesRow, users } from '@/db/schema';
-import type { CatalogueEntry, LibraryConstant } from '@/lib/library/build';
+import { buildSelection, type CatalogueEntry, type LibraryConstant, type SelectionBuild, type SelectionChoice, selectionKey } from '@/lib/library/build';
 import { type CheckedReaction, fromSignedTerms, isSolidFormula, ReactionError } from '@/lib/library/reaction';
 import { analyseFormula, molarMass } from '@/lib/units';
 import { readRevisions, type Revisions } from '@/server/revisions';
@@ -189,8 +189,37 @@ export function libraryConstants(snap: LibrarySnapshot): LibraryConstant[] {
   }));
 }
 
-/** What the system builder reads: the catalogue and every version. */
-export type BuildInputs = { catalogue: CatalogueEntry[]; constants: LibraryConstant[] };
+/**
+ * What the system builder reads: the catalogue and every version, with the library-dependent part
+ * of each selection built so far on them (selectionFor).
+ */
+export type BuildInputs = { catalogue: CatalogueEntry[]; constants: LibraryConstant[]; selections: Map<string, SelectionBuild> };
+
+/** Selections kept per library revision; a bath shop uses a handful, so the limit is rarely met. */
+const SELECTION_LIMIT = 64;
+
+/** Freezes a kept build part all the way down, so a caller that changed it would fail loudly instead of altering others' builds. */
+function freezeDeep<T>(value: T): T {
+  if (typeof value === 'object' && value !== null && !Object.isFrozen(value)) {
+    Object.freeze(value);
+    for (const v of Object.values(value)) freezeDeep(v);
+  }
+  return value;
+}
+
+/**
+ * The library-dependent part of a build for this choice of ions (lib/library/build.ts), built once
+ * per library revision and choice, whatever the totals and pH. Throws BuildError as buildSystem does.
+ */
+export function selectionFor(inputs: BuildInputs, sel: SelectionChoice): SelectionBuild {
+  const key = selectionKey(sel);
+  const held = inputs.selections.get(key);
+  if (held) return held;
+  const part = freezeDeep(buildSelection(inputs.catalogue, inputs.constants, sel));
+  if (inputs.selections.size >= SELECTION_LIMIT) inputs.selections.clear();
+  inputs.selections.set(key, part);
+  return part;
+}
 
 // The builder's view of the library, kept between requests: every calculation needs it, and
 // reading and mapping the whole library took most of a calculation's time. library_revision counts
@@ -209,7 +238,7 @@ export async function libraryForBuild(tx: Tx, known?: Revisions): Promise<BuildI
   const held = key === null ? undefined : buildCache.get(key);
   if (held) return held;
   const snap = await readLibrary(tx);
-  const inputs = { catalogue: catalogueOf(snap), constants: libraryConstants(snap) };
+  const inputs = { catalogue: catalogueOf(snap), constants: libraryConstants(snap), selections: new Map<string, SelectionBuild>() };
   if (key === null) return inputs;
   if (buildCache.size >= BUILD_CACHE_LIMIT) buildCache.delete(buildCache.keys().next().value as string);
   buildCache.set(key, inputs);

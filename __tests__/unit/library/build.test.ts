@@ -2,7 +2,7 @@
 // problem. Values here are small hand-made libraries, not the seed, so each expectation can be
 // worked out by hand beside it.
 import { solve } from '@/lib/engine';
-import { BuildError, buildSystem, type BuildSelection, type CatalogueEntry, type LibraryConstant } from '@/lib/library/build';
+import { BuildError, buildSelection, buildSystem, completeBuild, type BuildSelection, type CatalogueEntry, type LibraryConstant, selectionKey } from '@/lib/library/build';
 import { checkReaction } from '@/lib/library/reaction';
 import type { ConstantKind, ConstantStatus } from '@/shared/constants';
 
@@ -115,6 +115,50 @@ describe('buildSystem', () => {
     expect(fieldOf({ totals: { 'Na+': 1 } })).toMatch(/^totals\.Na\+: .*not one of the chosen ions/);
     expect(fieldOf({ solids: ['Cu(OH)2(s)'] })).toMatch(/^solids\.0: .*cannot form.*AgCl\(s\)/);
     expect(fieldOf({ pH: 7, totals: { 'H+': 0.1 } })).toMatch(/^totals\.H\+: give either a pH or a total/);
+  });
+
+  it('builds in two parts: one kept part per choice of ions serves any totals and pH exactly as a whole build does', () => {
+    const choice = select({ pH: 9, solids: ['AgCl(s)'] });
+    const part = buildSelection(CATALOGUE, LIBRARY, choice);
+    // Frozen as the server keeps it: finishing a build must only read it.
+    const frozen = JSON.parse(JSON.stringify(part)) as typeof part;
+    const freeze = (v: unknown): void => {
+      if (typeof v === 'object' && v !== null) {
+        Object.freeze(v);
+        Object.values(v).forEach(freeze);
+      }
+    };
+    freeze(frozen);
+    const overs: Partial<BuildSelection>[] = [{ totals: { 'Ag+': 0.1, NH3: 1 }, pH: 9 }, { totals: { 'Ag+': 0.02, 'Cl-': 0.5 }, pH: 10.5 }, { totals: { 'Na+': 1 }, pH: 9 }, { totals: { 'H+': 0.1 }, pH: 9 }];
+    for (const over of overs) {
+      const sel = select({ ...choice, ...over });
+      expect(selectionKey(sel)).toBe(selectionKey(choice));
+      const whole = (() => {
+        try {
+          return buildSystem(CATALOGUE, LIBRARY, sel);
+        } catch (e) {
+          return String(e);
+        }
+      })();
+      const halves = (() => {
+        try {
+          return completeBuild(frozen, sel);
+        } catch (e) {
+          return String(e);
+        }
+      })();
+      expect(halves).toEqual(whole);
+    }
+    // A solid that cannot form is refused when the build is finished, with the whole build's message.
+    const badSolid = select({ pH: 9, solids: ['Cu(OH)2(s)'] });
+    expect(() => completeBuild(buildSelection(CATALOGUE, LIBRARY, badSolid), badSolid)).toThrow(/cannot form from the chosen ions \(those that can: AgCl\(s\)\)/);
+    // What the library-dependent part depends on changes the key; the totals and the pH value do not.
+    expect(selectionKey(select({ pH: 9 }))).not.toBe(selectionKey(select({})));
+    expect(selectionKey(select({ activity: 'davies' }))).not.toBe(selectionKey(select({})));
+    expect(selectionKey(select({ temperatureC: 40 }))).not.toBe(selectionKey(select({})));
+    expect(selectionKey(select({ includeDrafts: true }))).not.toBe(selectionKey(select({})));
+    expect(selectionKey(select({ ligands: ['Cl-', 'NH3'] }))).not.toBe(selectionKey(select({})));
+    expect(selectionKey(select({ solids: [] }))).not.toBe(selectionKey(select({})));
   });
 
   it('solves silver chloride in 1 M ammonia to the closed-form answer', () => {
