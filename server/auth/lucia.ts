@@ -16,9 +16,9 @@ type SessionUserRow = { id: string; user_id: string; expires_at: string | Date; 
 
 /**
  * lucia's Drizzle adapter, with the one look-up every signed-in request makes written as plain
- * SQL on the driver: the same join, without building the query through Drizzle each time (about
- * a third of a request's CPU under load went to query building). Only the user attributes
- * getUserAttributes reads are selected; the rarer calls stay with the Drizzle adapter.
+ * SQL on the driver: the same join, without building the query through Drizzle each time (the
+ * builder was one of the larger costs of a request under `npm run load`). Only the user
+ * attributes getUserAttributes reads are selected; the rarer calls stay with the Drizzle adapter.
  */
 class SessionAdapter extends DrizzlePostgreSQLAdapter {
   constructor(private readonly client: Db['$client'], db: Db) {
