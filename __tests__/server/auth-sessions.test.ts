@@ -106,6 +106,25 @@ describe('sign-in, sessions and sign-out', () => {
     expect(reuse.status).toBe(401);
   });
 
+  it('an expired session is refused and cleared; one in its second half is extended to 30 days with a fresh cookie', async () => {
+    const person = await createUser(t.db.db, { roles: ['chemist'] });
+    const agent = t.agent();
+    expect((await agent.post('/api/auth/sign-in').send({ email: person.email, password: TEST_PASSWORD })).status).toBe(200);
+    const day = 86_400_000;
+    // 10 days left of 30: lucia extends it on the next use.
+    await t.db.db.update(sessions).set({ expiresAt: new Date(Date.now() + 10 * day) }).where(eq(sessions.userId, person.id));
+    const extended = await agent.get('/api/me');
+    expect(extended.status).toBe(200);
+    expect(sessionCookie(extended)).toMatch(/Max-Age=2592000/);
+    const [row] = await t.db.db.select().from(sessions).where(eq(sessions.userId, person.id));
+    expect((row?.expiresAt.getTime() ?? 0) - Date.now()).toBeGreaterThan(29 * day);
+    // Past its end: refused, and the cookie is blanked.
+    await t.db.db.update(sessions).set({ expiresAt: new Date(Date.now() - 1000) }).where(eq(sessions.userId, person.id));
+    const expired = await agent.get('/api/me');
+    expect(expired.status).toBe(401);
+    expect(sessionCookie(expired)).toMatch(/^ligandry_session=;/);
+  });
+
   it('a session id planted before sign-in is not the one after it (no fixation)', async () => {
     const person = await createUser(t.db.db, { roles: ['chemist'] });
     const first = t.agent();
