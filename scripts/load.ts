@@ -31,7 +31,6 @@
 
 import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
-import { createServer } from 'node:net';
 import { cpus, tmpdir } from 'node:os';
 import path from 'node:path';
 
@@ -39,6 +38,7 @@ import { dropDatabase } from '@/db/ensure-database';
 import { prepareDemoDatabase } from '@/db/prepare';
 import { DEMO_PASSWORD } from '@/db/seed/team';
 
+import { freePort } from './lib/free-port';
 import { parseLoadArgs, UsageError } from './lib/load-args';
 
 const USAGE = `Usage: npm run --silent load [-- [--json] [--quick | --duration N]]
@@ -189,19 +189,6 @@ async function prepareLoadDatabase(url: string, uploadsDir: string): Promise<voi
     throw new SetupError(`the database ${DB_NAME} could not be prepared: ${lastLine((err as Error).message)}`);
   }
   progress(`database ${DB_NAME} prepared with the demo shop`);
-}
-
-/** A port on 127.0.0.1 that nothing listens on right now. */
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const probe = createServer();
-    probe.once('error', reject);
-    probe.listen(0, '127.0.0.1', () => {
-      const address = probe.address();
-      const port = typeof address === 'object' && address ? address.port : 0;
-      probe.close(() => resolve(port));
-    });
-  });
 }
 
 /** Starts server/index.ts in its own process; the returned text holds the end of its stderr. */

@@ -2,10 +2,10 @@
 // NOTE: relative imports: jest loads global setup files without the @/ module mapping.
 import { spawn, type ChildProcess } from 'node:child_process';
 import fs from 'node:fs';
-import net from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
 
+import { freePort } from '../../scripts/lib/free-port';
 import { testDatabaseUrl } from '../support/test-db';
 
 const ROOT = path.resolve(__dirname, '../..');
@@ -13,18 +13,6 @@ const ROOT = path.resolve(__dirname, '../..');
 declare global {
   // eslint-disable-next-line no-var
   var __ligandryBrowserServer: ChildProcess | undefined;
-}
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const probe = net.createServer();
-    probe.once('error', reject);
-    probe.listen(0, '127.0.0.1', () => {
-      const address = probe.address();
-      const port = typeof address === 'object' && address ? address.port : 0;
-      probe.close(() => resolve(port));
-    });
-  });
 }
 
 async function waitHealthy(url: string, child: ChildProcess, output: () => string): Promise<void> {

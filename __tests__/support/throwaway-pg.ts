@@ -4,9 +4,10 @@
 import { execFile } from 'node:child_process';
 import { randomBytes } from 'node:crypto';
 import fs from 'node:fs';
-import net from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
+
+import { freePort } from '@/scripts/lib/free-port';
 
 const SUPERUSER = 'ligandry';
 
@@ -41,19 +42,6 @@ function run(program: string, args: string[]): Promise<void> {
     execFile(cmd, argv, { cwd: '/', timeout: 60_000 }, (err, stdout, stderr) => {
       if (err) reject(new Error(`${path.basename(program)} ${args[0] ?? ''} failed: ${err.message}\n${stdout}${stderr}`));
       else resolve();
-    });
-  });
-}
-
-/** A loopback port nothing listens on right now. */
-async function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const probe = net.createServer();
-    probe.once('error', reject);
-    probe.listen(0, '127.0.0.1', () => {
-      const address = probe.address();
-      const port = typeof address === 'object' && address ? address.port : 0;
-      probe.close(() => resolve(port));
     });
   });
 }
