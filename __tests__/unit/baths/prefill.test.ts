@@ -1,7 +1,9 @@
 // A calculator's system from a bath's latest analysis: the totals, the estimate of total ligand
 // when only free ligand was titrated, the counter-ion for the ionic strength, and what is missing.
 import { latestAnalysis, prefillFromBath } from '@/lib/baths/prefill';
-import type { Analysis, Bath } from '@/shared/baths';
+import type { Bath } from '@/shared/baths';
+
+import { analysis } from '@/__tests__/support/analyses';
 
 const bath = {
   metal: 'Ag+',
@@ -10,22 +12,6 @@ const bath = {
   extras: ['carbonate'],
   temperatureC: 22,
 } as unknown as Bath;
-
-function analysis(sampledAt: string, values: Partial<Analysis['values']>): Analysis {
-  return {
-    id: sampledAt,
-    bathId: 'b',
-    sampledAt,
-    analyst: 'A',
-    values: { metal: null, freeLigand: null, totalLigand: null, pH: null, carbonate: null, bromide: null, ...values },
-    entered: {},
-    notes: '',
-    source: 'manual',
-    enteredBy: { id: 'u', name: 'U' },
-    createdAt: sampledAt,
-    outOfRange: [],
-  };
-}
 
 describe('prefillFromBath', () => {
   it('takes the newest analysis and estimates total cyanide as free + 2 per silver', () => {

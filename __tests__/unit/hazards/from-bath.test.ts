@@ -1,7 +1,9 @@
 // The hazards of a bath from its latest analysis and its make-up salts; no solve, so the HCN share
 // comes from the pH and pKa 9.21.
 import { bathHazards, bathSituation } from '@/lib/hazards';
-import type { Analysis, Bath } from '@/shared/baths';
+import type { Bath } from '@/shared/baths';
+
+import { analysis } from '@/__tests__/support/analyses';
 import { DEFAULT_THRESHOLDS, DEFER_TO_SDS, hazardSchema } from '@/shared/safety';
 
 const T = DEFAULT_THRESHOLDS;
@@ -9,22 +11,6 @@ const T = DEFAULT_THRESHOLDS;
 // Invented baths; only the fields the rules read.
 const bath = (over: Partial<Bath>): Bath =>
   ({ process: 'cyanide_silver_plate', metal: 'Ag+', ligand: 'CN-', ligandAs: 'KCN', extras: ['carbonate'], temperatureC: 22, makeUp: [], ...over }) as unknown as Bath;
-
-function analysis(sampledAt: string, values: Partial<Analysis['values']>): Analysis {
-  return {
-    id: sampledAt,
-    bathId: 'b',
-    sampledAt,
-    analyst: 'A',
-    values: { metal: null, freeLigand: null, totalLigand: null, pH: null, carbonate: null, bromide: null, ...values },
-    entered: {},
-    notes: '',
-    source: 'manual',
-    enteredBy: { id: 'u', name: 'U' },
-    createdAt: sampledAt,
-    outOfRange: [],
-  };
-}
 
 describe('bathSituation', () => {
   it('takes totals and pH from the latest analysis and reagents from the make-up and the ligand salt', () => {
