@@ -60,6 +60,25 @@ async function lockForDecision(tx: Tx, id: string, user: User, wanted: 'pending'
   }
 }
 
+/** One step of a review: the status it must be in, what its row becomes, and the event and audit that record it. */
+interface ReviewStep {
+  from: 'pending' | 'sent_back';
+  set: Pick<typeof safetyReviews.$inferInsert, 'status' | 'decidedBy' | 'decidedAt' | 'conditions' | 'note'>;
+  action: 'signed_off' | 'sent_back' | 'resubmitted';
+  /** The event's note (null for none). */
+  note: string | null;
+  payload: Record<string, unknown>;
+}
+
+/** Takes a review one step in `tx`: checked and locked, its row moved, the event and the audit written; returns it as it now stands. */
+async function stepReview(tx: Tx, id: string, user: User, step: ReviewStep) {
+  await lockForDecision(tx, id, user, step.from);
+  await tx.update(safetyReviews).set(step.set).where(eq(safetyReviews.id, id));
+  await tx.insert(safetyReviewEvents).values({ reviewId: id, action: step.action, actorId: user.id, note: step.note });
+  await writeAudit(tx, { actor: user.id, action: `safety.${step.action}`, subject: `review:${id}`, payload: step.payload });
+  return (await reviewDetail(tx, id)).review;
+}
+
 /** Thresholds, the desk's reviews and run releases. */
 export function safetyRouter(ctx: AuthContext): Router {
   const router = Router();
@@ -112,14 +131,16 @@ export function safetyRouter(ctx: AuthContext): Router {
     const user = requireUser(res);
     const id = reviewId(req);
     const input = signOffSchema.parse(req.body ?? {});
-    const review = await db.transaction(async (tx) => {
-      await lockForDecision(tx, id, user, 'pending');
-      const conditions = input.conditions.trim();
-      await tx.update(safetyReviews).set({ status: 'signed_off', decidedBy: user.id, decidedAt: new Date(), conditions, note: null }).where(eq(safetyReviews.id, id));
-      await tx.insert(safetyReviewEvents).values({ reviewId: id, action: 'signed_off', actorId: user.id, note: conditions || null });
-      await writeAudit(tx, { actor: user.id, action: 'safety.signed_off', subject: `review:${id}`, payload: { conditions } });
-      return (await reviewDetail(tx, id)).review;
-    });
+    const conditions = input.conditions.trim();
+    const review = await db.transaction((tx) =>
+      stepReview(tx, id, user, {
+        from: 'pending',
+        set: { status: 'signed_off', decidedBy: user.id, decidedAt: new Date(), conditions, note: null },
+        action: 'signed_off',
+        note: conditions || null,
+        payload: { conditions },
+      }),
+    );
     await mailDecision(ctx, req, review);
     res.json(output(reviewSchema, review));
   });
@@ -128,13 +149,15 @@ export function safetyRouter(ctx: AuthContext): Router {
     const user = requireUser(res);
     const id = reviewId(req);
     const input = sendBackSchema.parse(req.body ?? {});
-    const review = await db.transaction(async (tx) => {
-      await lockForDecision(tx, id, user, 'pending');
-      await tx.update(safetyReviews).set({ status: 'sent_back', decidedBy: user.id, decidedAt: new Date(), conditions: null, note: input.note }).where(eq(safetyReviews.id, id));
-      await tx.insert(safetyReviewEvents).values({ reviewId: id, action: 'sent_back', actorId: user.id, note: input.note });
-      await writeAudit(tx, { actor: user.id, action: 'safety.sent_back', subject: `review:${id}`, payload: { note: input.note } });
-      return (await reviewDetail(tx, id)).review;
-    });
+    const review = await db.transaction((tx) =>
+      stepReview(tx, id, user, {
+        from: 'pending',
+        set: { status: 'sent_back', decidedBy: user.id, decidedAt: new Date(), conditions: null, note: input.note },
+        action: 'sent_back',
+        note: input.note,
+        payload: { note: input.note },
+      }),
+    );
     await mailDecision(ctx, req, review);
     res.json(output(reviewSchema, review));
   });
@@ -143,13 +166,15 @@ export function safetyRouter(ctx: AuthContext): Router {
     const user = requireUser(res);
     const id = reviewId(req);
     const input = resubmitSchema.parse(req.body ?? {});
-    const review = await db.transaction(async (tx) => {
-      await lockForDecision(tx, id, user, 'sent_back');
-      await tx.update(safetyReviews).set({ status: 'pending', decidedBy: null, decidedAt: null, conditions: null, note: input.note }).where(eq(safetyReviews.id, id));
-      await tx.insert(safetyReviewEvents).values({ reviewId: id, action: 'resubmitted', actorId: user.id, note: input.note });
-      await writeAudit(tx, { actor: user.id, action: 'safety.resubmitted', subject: `review:${id}`, payload: { note: input.note } });
-      return (await reviewDetail(tx, id)).review;
-    });
+    const review = await db.transaction((tx) =>
+      stepReview(tx, id, user, {
+        from: 'sent_back',
+        set: { status: 'pending', decidedBy: null, decidedAt: null, conditions: null, note: input.note },
+        action: 'resubmitted',
+        note: input.note,
+        payload: { note: input.note },
+      }),
+    );
     await mailWaiting(ctx, req, id, { resubmitted: true, note: input.note });
     res.json(output(reviewSchema, review));
   });
