@@ -180,7 +180,7 @@ export function analysesImportRouter(ctx: AuthContext): Router {
       }
       if (ids.length > 0) {
         await writeAudit(tx, { actor: user.id, action: 'analyses.imported', subject: `bath:${row.id}`, payload: { file: file.originalname, rows: csv.records.length, created: ids.length, rejected } });
-        opened = await checkBath(tx, row, user.id);
+        ({ opened } = await checkBath(tx, bath, user.id));
       }
       return { ...base, created: ids.length, written: ids.length > 0, analysisIds: ids };
     });

@@ -51,10 +51,14 @@ function changes(before: BathRow, after: Partial<BathRow>): Record<string, { fro
   return out;
 }
 
-/** A bath with its hazards and latest safety review (the single-bath answers). */
-async function withSafety(tx: Tx, row: BathRow): Promise<Bath> {
+/**
+ * After a bath is stored or changed: the hazard check (which may open a review), and the bath with
+ * its hazards and latest review as the answer gives it.
+ */
+async function checkedBath(tx: Tx, row: BathRow, userId: string): Promise<{ bath: Bath; opened: string | null }> {
   const bath = await bathOf(tx, row);
-  return { ...bath, safety: await bathSafety(tx, bath) };
+  const { hazards, opened } = await checkBath(tx, bath, userId);
+  return { bath: { ...bath, safety: await bathSafety(tx, bath, hazards) }, opened };
 }
 
 /** Baths, analyses, the analysis CSV upload and attachments. */
@@ -114,15 +118,15 @@ export function bathsRouter(ctx: AuthContext, uploadsDir: string): Router {
       const [row] = await tx.insert(baths).values({ id: randomUUID(), ...columns, createdBy: user.id }).returning();
       if (!row) throw new Error('bath not stored');
       await writeAudit(tx, { actor: user.id, action: 'bath.created', subject: `bath:${row.id}`, payload: { name: row.name, process: row.process } });
-      const review = await checkBath(tx, row, user.id);
-      return { bath: await withSafety(tx, row), opened: review };
+      return checkedBath(tx, row, user.id);
     });
     if (opened) await mailWaiting(ctx, req, opened);
     res.status(201).json(output(bathSchema, bath));
   });
 
   router.get('/baths/:id', signedIn, async (req: Request, res: Response) => {
-    res.json(output(bathSchema, await withSafety(db, await findBath(db, req.params.id))));
+    const bath = await bathOf(db, await findBath(db, req.params.id));
+    res.json(output(bathSchema, { ...bath, safety: await bathSafety(db, bath) }));
   });
 
   router.patch('/baths/:id', allow('chemist', 'technician'), async (req: Request, res: Response) => {
@@ -158,8 +162,7 @@ export function bathsRouter(ctx: AuthContext, uploadsDir: string): Router {
       const [row] = await tx.update(baths).set({ ...columns, updatedAt: new Date() }).where(eq(baths.id, before.id)).returning();
       if (!row) throw new Error('bath not updated');
       if (Object.keys(diff).length > 0) await writeAudit(tx, { actor: user.id, action: 'bath.updated', subject: `bath:${row.id}`, payload: { name: row.name, changes: diff } });
-      const review = await checkBath(tx, row, user.id);
-      return { bath: await withSafety(tx, row), opened: review };
+      return checkedBath(tx, row, user.id);
     });
     if (opened) await mailWaiting(ctx, req, opened);
     res.json(output(bathSchema, bath));
@@ -214,8 +217,8 @@ export function bathsRouter(ctx: AuthContext, uploadsDir: string): Router {
         .returning();
       if (!stored) throw new Error('analysis not stored');
       await writeAudit(tx, { actor: user.id, action: 'analysis.added', subject: `bath:${row.id}`, payload: { analysis: stored.id, sampledAt: stored.sampledAt.toISOString(), entered: stored.entered } });
-      const review = await checkBath(tx, row, user.id);
-      return { analysis: toAnalysis(stored, bath, new Map([[user.id, user.name]])), opened: review };
+      const { opened } = await checkBath(tx, bath, user.id);
+      return { analysis: toAnalysis(stored, bath, new Map([[user.id, user.name]])), opened };
     });
     if (opened) await mailWaiting(ctx, req, opened);
     res.status(201).json(output(analysisSchema, analysis));

@@ -8,7 +8,6 @@ import { and, arrayContains, asc, desc, eq, inArray, sql } from 'drizzle-orm';
 import type { Db } from '@/db/client';
 import {
   analyses,
-  type BathRow,
   baths,
   hazardThresholds,
   type ReviewRow,
@@ -21,7 +20,7 @@ import {
 } from '@/db/schema';
 import { bathHazards, calculationHazards, isFlagged } from '@/lib/hazards';
 import { writeAudit } from '@/server/audit';
-import { bathOf, toAnalysis } from '@/server/baths/store';
+import { toAnalysis } from '@/server/baths/store';
 import { HttpError } from '@/server/http-error';
 import type { Tx } from '@/server/library/store';
 import { readRevisions, type Revisions } from '@/server/revisions';
@@ -256,9 +255,9 @@ async function latestAnalysisOf(tx: Tx, bath: Bath): Promise<ReturnType<typeof t
   return rows.map((a) => toAnalysis(a, bath, new Map()));
 }
 
-/** A bath's hazards from its latest analysis, with its latest review. */
-export async function bathSafety(tx: Tx, bath: Bath, thresholds?: HazardThresholds): Promise<SafetyState> {
-  const hazards = safeBathHazards(bath, await latestAnalysisOf(tx, bath), thresholds ?? (await currentThresholds(tx)).values);
+/** A bath's hazards from its latest analysis (or as `checkBath` just found them), with its latest review. */
+export async function bathSafety(tx: Tx, bath: Bath, known?: Hazard[]): Promise<SafetyState> {
+  const hazards = known ?? safeBathHazards(bath, await latestAnalysisOf(tx, bath), (await currentThresholds(tx)).values);
   const latest = await latestReviewOfBath(tx, bath.id);
   const [review] = latest ? await reviewSummaries(tx, [latest]) : [];
   return { hazards, flagged: isFlagged(hazards), review: review ?? null, released: null };
@@ -275,19 +274,20 @@ export function safeBathHazards(bath: Bath, list: Parameters<typeof bathHazards>
 /**
  * After a bath is created, edited or analysed: when a flag-level rule fires and its last review
  * does not already cover the same rules (pending, signed off, or sent back and not yet
- * resubmitted), a new review is opened. Returns the new review's id, or null.
+ * resubmitted), a new review is opened. Returns the hazards found (for bathSafety) and the new
+ * review's id, or null.
  */
-export async function checkBath(tx: Tx, bathRow: BathRow, userId: string): Promise<string | null> {
+export async function checkBath(tx: Tx, bath: Bath, userId: string): Promise<{ hazards: Hazard[]; opened: string | null }> {
   // One check per bath at a time, so two analyses saved together open one review.
-  await tx.execute(sql`select id from baths where id = ${bathRow.id} for update`);
-  const bath = await bathOf(tx, bathRow);
+  await tx.execute(sql`select id from baths where id = ${bath.id} for update`);
   const thresholds = await currentThresholds(tx);
   const hazards = safeBathHazards(bath, await latestAnalysisOf(tx, bath), thresholds.values);
   const flags = flagsOf(hazards);
-  if (flags.length === 0) return null;
+  if (flags.length === 0) return { hazards, opened: null };
   const latest = await latestReviewOfBath(tx, bath.id);
-  if (latest && (latest.status === 'pending' || flags.every((f) => latest.flags.includes(f)))) return null;
-  return openReview(tx, { subject: { kind: 'bath', bathId: bath.id }, hazards, thresholdsVersion: thresholds.version, submittedBy: userId });
+  if (latest && (latest.status === 'pending' || flags.every((f) => latest.flags.includes(f)))) return { hazards, opened: null };
+  const opened = await openReview(tx, { subject: { kind: 'bath', bathId: bath.id }, hazards, thresholdsVersion: thresholds.version, submittedBy: userId });
+  return { hazards, opened };
 }
 
 /** Active people with the safety role (whom the desk's mail goes to). */
