@@ -344,7 +344,6 @@ describe('SQL injection through text fields and searches comes back as plain dat
   });
 
   it('constant source, medium and note; review, revision and retirement notes; a reaction that is not one', async () => {
-    const SOURCE = 'Security compilation, table 2 (values made up for this test)';
     const first = await as(cookies.chemist, 'post', '/api/constants').send({ kind: 'cumulative_formation', reaction: 'Cd+2 + I- = CdI+', logValue: 2, source: VALUES[0], medium: VALUES[1], note: VALUES[2] });
     expect(first.status).toBe(201);
     expect([first.body.source, first.body.medium, first.body.note]).toEqual([VALUES[0], VALUES[1], VALUES[2]]);

@@ -5,7 +5,7 @@ import { placeApiError, placeCalculatorError } from '@/components/screens/calcul
 import { ApiError } from '@/lib/api/fetcher';
 import { CalculatorInputError } from '@/lib/calculators/errors';
 
-import { BATH_ID, bathRoutes, silverAnalysis, silverBath } from './bath-fixtures';
+import { BATH_ID, bathRoutes, silverBath } from './bath-fixtures';
 import { chemist, errorBody, mockApi, sentBodies, type Routes } from './helpers';
 
 const phone = Dimensions.get('window');
@@ -68,7 +68,6 @@ const fixerBuilt = {
 const buildRoute = (body: unknown) => ({ status: 200, body: cyanideBuilt((body as { pH?: number }).pH !== undefined) });
 
 const bath = silverBath();
-const analysis = silverAnalysis;
 const tankRoutes: Routes = bathRoutes(bath);
 
 function open(url: string, routes: Routes = {}) {

@@ -75,7 +75,6 @@ export class BuildError extends Error {
 
 const PROTON = 'H+';
 const WATER = 'H2O';
-const REFERENCE_C = 25;
 
 /** A species written through the components: log K of formation, stoichiometry, constants used. */
 interface Derived {

@@ -3,7 +3,7 @@
 // of rows), so lists are read whole and filtered here rather than in SQL.
 import { randomUUID } from 'node:crypto';
 
-import { eq, inArray, sql } from 'drizzle-orm';
+import { eq, inArray } from 'drizzle-orm';
 
 import type { Db } from '@/db/client';
 import { constants, constantTerms, type ConstantRow, species, type SpeciesRow, users } from '@/db/schema';

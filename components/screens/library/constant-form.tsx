@@ -8,7 +8,6 @@ import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { Notice } from '@/components/ui/notice';
 import { TextField } from '@/components/ui/text-field';
-import { ThemedText } from '@/components/ui/themed-text';
 import { KIND_LABELS, type ConstantSummary } from '@/shared/constants';
 
 function summary(form: ConstantFormState): string | undefined {
