@@ -21,7 +21,7 @@ export interface CalculationHazardInput {
   outcome?: { result?: unknown } | null;
   /**
    * The base solution (the built problem at the system's pH), when the caller has solved it
-   * already: a speciation's own result, or a saved run's. Omitted: solved here.
+   * already (a saved run's). Omitted: a speciation's own result, else solved here.
    */
   base?: SolvedSolution | null;
 }
@@ -51,6 +51,13 @@ function baseSolution(problem: ProblemJson, pH: number | undefined): SolvedSolut
 export function solutionOf(result: unknown): SolvedSolution | null {
   if (!isRecord(result) || result.status !== 'converged') return null;
   return { free: numbers(result.free), species: numbers(result.species) };
+}
+
+/** A speciation's result holds the base solution itself (the same problem at the same pH); undefined for other calculators or no result. */
+function speciationBase(input: CalculationHazardInput): SolvedSolution | null | undefined {
+  const result = input.outcome?.result;
+  if (input.calculator !== 'speciation' || !isRecord(result) || result.result === undefined) return undefined;
+  return solutionOf(result.result);
 }
 
 const rawSteps = (params: unknown): Json[] => (isRecord(params) && Array.isArray(params.steps) ? params.steps.map((s) => (isRecord(s) ? s : {})) : []);
@@ -154,7 +161,7 @@ export function calculationSituation(input: CalculationHazardInput): HazardSitua
   return {
     totals: numbers(input.system?.totals),
     pH,
-    solution: input.base !== undefined ? input.base : baseSolution(input.problem, pH ?? undefined),
+    solution: input.base !== undefined ? input.base : (speciationBase(input) ?? baseSolution(input.problem, pH ?? undefined)),
     reagents: reagentsOf(input.calculator, input.params),
     ...(input.calculator === 'dosing_plan' ? { steps: dosingSteps(input) } : {}),
   };

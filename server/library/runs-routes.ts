@@ -257,9 +257,7 @@ export function runsRouter(ctx: AuthContext): Router {
     const built = await buildFromLibrary(db, request.system, revisions);
     const run = calculate(request.calculator, request.params, built, request.system.pH);
     const thresholds = await currentThresholds(db, revisions);
-    // A speciation's result is the base solution the rules look at: no second solve for it.
-    const base = request.calculator === 'speciation' ? solutionOf((run.result as { result?: unknown } | null)?.result) : undefined;
-    const hazards = calculationHazards({ calculator: request.calculator, system: request.system, params: request.params, problem: built.problem, outcome: { result: run.result }, base }, thresholds.values);
+    const hazards = calculationHazards({ calculator: request.calculator, system: request.system, params: request.params, problem: built.problem, outcome: { result: run.result } }, thresholds.values);
     res.json(output(calculationOutcomeSchema, { ...run, hazards }));
   });
 

@@ -40,6 +40,8 @@ describe('calculationHazards: engine speciation', () => {
     const base = solutionOf((run.result as { result: unknown }).result);
     expect(base).not.toBeNull();
     expect(calculationHazards(input({ outcome: { result: run.result }, base }), T)).toEqual(calculationHazards(input({}), T));
+    // A speciation's outcome alone is enough: its result is that base solution.
+    expect(calculationSituation(input({ outcome: { result: run.result } })).solution).toEqual(base);
     // Passed, it is used as given: a problem that cannot be solved still gets the engine's share.
     const broken = { ...problem, species: [{ name: 'HCN', logK: 9.21, stoich: { 'H+': 1, 'XX-': 1 } }] };
     expect(calculationSituation(input({ problem: broken, base })).solution).toEqual(base);
